@@ -1,0 +1,32 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { PageHeader, PageShell } from "@/components/page-header";
+import { Card } from "@/components/ui/card";
+import { requirePageUser } from "@/lib/auth/guard";
+
+export const metadata: Metadata = { title: "Admin" };
+
+const SECTIONS = [
+  { href: "/admin/users", title: "Accounts and roles", text: "Who can use the workshop, the shipping desk and this page." },
+];
+
+export default async function AdminHomePage() {
+  await requirePageUser("admin:users", "/admin");
+  return (
+    <PageShell>
+      <PageHeader title="Admin" lead="Accounts, the center's details, rates and refunds." />
+      <div className="grid gap-4 md:grid-cols-2">
+        {SECTIONS.map((s) => (
+          <Card key={s.href}>
+            <h2 className="font-display text-xl font-semibold">
+              <Link href={s.href} className="text-moss-800 underline">
+                {s.title}
+              </Link>
+            </h2>
+            <p className="mt-1 text-ink-soft">{s.text}</p>
+          </Card>
+        ))}
+      </div>
+    </PageShell>
+  );
+}

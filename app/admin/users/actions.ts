@@ -1,0 +1,18 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { z } from "zod";
+import { setUserRole } from "@/lib/accounts/users";
+import { ROLES } from "@/lib/auth/roles";
+import { action } from "@/lib/http/action";
+
+const setRoleSchema = z.object({
+  userId: z.uuid("Choose an account."),
+  role: z.enum(ROLES, "Choose one of the roles."),
+});
+
+export const setRoleAction = action({ permission: "admin:users" }, setRoleSchema, async (input, user) => {
+  await setUserRole({ id: input.userId, role: input.role, actorId: user!.id });
+  revalidatePath("/admin/users");
+  return { userId: input.userId, role: input.role };
+});

@@ -1,0 +1,34 @@
+import type { Metadata, Viewport } from "next";
+import type { ReactNode } from "react";
+import { SiteFooter } from "@/components/site-footer";
+import { SiteHeader } from "@/components/site-header";
+import { Providers } from "@/components/providers";
+import { getSessionUser } from "@/lib/auth/session";
+import { navFor } from "@/lib/auth/nav";
+import { bodyFont, displayFont } from "./fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Roostwright · Cedar Hollow Wildlife Rescue", template: "%s · Roostwright" },
+  description:
+    "Certified bat roost houses built by volunteers for Cedar Hollow Wildlife Rescue, matched to your summers, with an install guide for your site.",
+};
+
+export const viewport: Viewport = { themeColor: "#1f3a2e", width: "device-width", initialScale: 1 };
+
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  const user = await getSessionUser();
+  return (
+    <html lang="en" className={`${displayFont.variable} ${bodyFont.variable}`}>
+      <body className="flex min-h-dvh flex-col">
+        <Providers>
+          <SiteHeader user={user ? { name: user.name, role: user.role } : null} nav={navFor(user?.role ?? null)} />
+          <main id="main" className="flex-1">
+            {children}
+          </main>
+          <SiteFooter />
+        </Providers>
+      </body>
+    </html>
+  );
+}

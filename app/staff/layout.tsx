@@ -1,0 +1,8 @@
+import type { ReactNode } from "react";
+import { requirePageUser } from "@/lib/auth/guard";
+
+// Every page below checks the role again next to its data; this layout is the first gate.
+export default async function StaffLayout({ children }: { children: ReactNode }) {
+  await requirePageUser("staff:models", "/staff");
+  return children;
+}

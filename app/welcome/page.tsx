@@ -1,0 +1,9 @@
+import { redirect } from "next/navigation";
+import { ROLE_HOME } from "@/lib/auth/roles";
+import { getSessionUser } from "@/lib/auth/session";
+
+// After sign-in every role lands in its own area.
+export default async function WelcomePage() {
+  const user = await getSessionUser();
+  redirect(user ? ROLE_HOME[user.role] : "/sign-in");
+}

@@ -1,0 +1,45 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { signIn } from "next-auth/react";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { Input } from "@/components/ui/input";
+import { FormError } from "@/components/ui/form-error";
+import { signInSchema, type SignIn } from "@/lib/auth/password-policy";
+
+export function SignInForm({ next }: { next: string }) {
+  const router = useRouter();
+  const [error, setError] = useState<string | null>(null);
+  const form = useForm<SignIn>({ resolver: zodResolver(signInSchema), defaultValues: { email: "", password: "" } });
+  const { errors, isSubmitting } = form.formState;
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    setError(null);
+    const result = await signIn("credentials", { ...values, redirect: false });
+    if (!result || result.error) {
+      setError(result?.error && result.error !== "CredentialsSignin" ? result.error : "Sign-in failed. Please try again.");
+      return;
+    }
+    router.push(next);
+    router.refresh();
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
+      <FormError message={error} />
+      <Field label="E-mail" error={errors.email?.message} required>
+        <Input type="email" autoComplete="email" {...form.register("email")} />
+      </Field>
+      <Field label="Password" error={errors.password?.message} required>
+        <Input type="password" autoComplete="current-password" {...form.register("password")} />
+      </Field>
+      <Button type="submit" loading={isSubmitting}>
+        Sign in
+      </Button>
+    </form>
+  );
+}

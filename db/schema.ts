@@ -1,0 +1,432 @@
+import { sql } from "drizzle-orm";
+import {
+  boolean,
+  check,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgEnum,
+  pgTable,
+  serial,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
+
+// Lengths are stored in inches, weights in pounds, money in integer cents, times in UTC.
+
+const timestamps = {
+  createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  updatedAt: timestamp("updated_at", { withTimezone: true, mode: "date" })
+    .notNull()
+    .defaultNow()
+    .$onUpdate(() => new Date()),
+};
+
+export const roleEnum = pgEnum("role", ["customer", "staff", "fulfillment", "admin"]);
+
+export const users = pgTable(
+  "users",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    email: text("email").notNull(),
+    name: text("name").notNull(),
+    passwordHash: text("password_hash").notNull(),
+    role: roleEnum("role").notNull().default("customer"),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex("users_email_key").on(t.email)],
+);
+
+/** Every sign-in attempt, so throttling holds across several app instances. */
+export const signInAttempts = pgTable(
+  "sign_in_attempts",
+  {
+    id: serial("id").primaryKey(),
+    email: text("email").notNull(),
+    ip: text("ip").notNull(),
+    succeeded: boolean("succeeded").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [index("sign_in_attempts_email_idx").on(t.email, t.createdAt), index("sign_in_attempts_ip_idx").on(t.ip, t.createdAt)],
+);
+
+export const passwordResetTokens = pgTable("password_reset_tokens", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  userId: uuid("user_id")
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  tokenHash: text("token_hash").notNull().unique(),
+  expiresAt: timestamp("expires_at", { withTimezone: true, mode: "date" }).notNull(),
+  usedAt: timestamp("used_at", { withTimezone: true, mode: "date" }),
+  createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+});
+
+/** The center's details printed on receipts; one row, id = 1. */
+export const organization = pgTable(
+  "organization",
+  {
+    id: integer("id").primaryKey().default(1),
+    legalName: text("legal_name").notNull(),
+    displayName: text("display_name").notNull(),
+    street: text("street").notNull(),
+    city: text("city").notNull(),
+    state: text("state").notNull(),
+    zip: text("zip").notNull(),
+    taxId: text("tax_id").notNull(),
+    email: text("email").notNull(),
+    phone: text("phone").notNull(),
+    ...timestamps,
+  },
+  (t) => [check("organization_single_row", sql`${t.id} = 1`)],
+);
+
+export const modelStatusEnum = pgEnum("model_status", ["draft", "published", "retired"]);
+
+export const houseModels = pgTable(
+  "house_models",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    slug: text("slug").notNull(),
+    name: text("name").notNull(),
+    tagline: text("tagline").notNull().default(""),
+    description: text("description").notNull().default(""),
+    status: modelStatusEnum("status").notNull().default("draft"),
+    priceCents: integer("price_cents").notNull(),
+    /** The listed design spec (lib/catalog/spec.ts), inches. */
+    spec: jsonb("spec").notNull(),
+    /** Mounts the model is built for: "pole", "building". */
+    mounts: text("mounts").array().notNull().default(sql`'{}'::text[]`),
+    backToBackKit: boolean("back_to_back_kit").notNull().default(false),
+    builderName: text("builder_name").notNull().default(""),
+    cartonLengthIn: doublePrecision("carton_length_in").notNull(),
+    cartonWidthIn: doublePrecision("carton_width_in").notNull(),
+    cartonHeightIn: doublePrecision("carton_height_in").notNull(),
+    cartonWeightLb: doublePrecision("carton_weight_lb").notNull(),
+    stock: integer("stock").notNull().default(0),
+    lowStockThreshold: integer("low_stock_threshold").notNull().default(3),
+    publishedAt: timestamp("published_at", { withTimezone: true, mode: "date" }),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("house_models_slug_key").on(t.slug),
+    index("house_models_status_idx").on(t.status),
+    check("house_models_stock_nonnegative", sql`${t.stock} >= 0`),
+    check("house_models_price_positive", sql`${t.priceCents} > 0`),
+  ],
+);
+
+export const modelPhotos = pgTable(
+  "model_photos",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    modelId: uuid("model_id")
+      .notNull()
+      .references(() => houseModels.id, { onDelete: "cascade" }),
+    position: integer("position").notNull().default(0),
+    altText: text("alt_text").notNull(),
+    /** Server-generated key prefix; sizes live at `${keyBase}-${width}.webp`. */
+    keyBase: text("key_base").notNull(),
+    widths: integer("widths").array().notNull(),
+    width: integer("width").notNull(),
+    height: integer("height").notNull(),
+    ...timestamps,
+  },
+  (t) => [index("model_photos_model_idx").on(t.modelId, t.position)],
+);
+
+export const inspections = pgTable(
+  "inspections",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    modelId: uuid("model_id")
+      .notNull()
+      .references(() => houseModels.id, { onDelete: "cascade" }),
+    inspectedOn: timestamp("inspected_on", { withTimezone: true, mode: "date" }).notNull(),
+    inspector: text("inspector").notNull(),
+    /** Measured values of the built unit (lib/catalog/certification.ts). */
+    measured: jsonb("measured").notNull(),
+    passed: boolean("passed").notNull(),
+    notes: text("notes").notNull().default(""),
+    recordedById: uuid("recorded_by_id").references(() => users.id),
+    createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [index("inspections_model_idx").on(t.modelId, t.inspectedOn)],
+);
+
+export const stockMovementKindEnum = pgEnum("stock_movement_kind", [
+  "received",
+  "adjusted",
+  "reserved",
+  "sold",
+  "released",
+]);
+
+/** The stock ledger: house_models.stock changes only together with a row here. */
+export const stockMovements = pgTable(
+  "stock_movements",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    modelId: uuid("model_id")
+      .notNull()
+      .references(() => houseModels.id),
+    kind: stockMovementKindEnum("kind").notNull(),
+    delta: integer("delta").notNull(),
+    stockAfter: integer("stock_after").notNull(),
+    reason: text("reason").notNull().default(""),
+    batch: text("batch"),
+    builderName: text("builder_name"),
+    orderId: uuid("order_id"),
+    actorId: uuid("actor_id").references(() => users.id),
+    createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [index("stock_movements_model_idx").on(t.modelId, t.createdAt), index("stock_movements_order_idx").on(t.orderId)],
+);
+
+/** NOAA NCEI U.S. Climate Normals 1981–2010: July normal daily maximum per station. */
+export const climateStations = pgTable("climate_stations", {
+  id: text("id").primaryKey(),
+  name: text("name").notNull(),
+  state: text("state").notNull(),
+  lat: doublePrecision("lat").notNull(),
+  lon: doublePrecision("lon").notNull(),
+  julyHighF: doublePrecision("july_high_f").notNull(),
+  flag: text("flag").notNull(),
+});
+
+export const shippingRates = pgTable(
+  "shipping_rates",
+  {
+    id: serial("id").primaryKey(),
+    maxBillableLb: integer("max_billable_lb").notNull(),
+    cents: integer("cents").notNull(),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex("shipping_rates_tier_key").on(t.maxBillableLb), check("shipping_rates_cents", sql`${t.cents} >= 0`)],
+);
+
+export const taxRates = pgTable(
+  "tax_rates",
+  {
+    state: text("state").primaryKey(),
+    basisPoints: integer("basis_points").notNull(),
+    ...timestamps,
+  },
+  (t) => [check("tax_rates_range", sql`${t.basisPoints} >= 0 and ${t.basisPoints} <= 2000`)],
+);
+
+export const orderStatusEnum = pgEnum("order_status", [
+  "pending_payment",
+  "paid",
+  "packing",
+  "packed",
+  "shipped",
+  "delivered",
+  "ready_for_pickup",
+  "picked_up",
+  "cancelled",
+  "expired",
+  "refunded",
+]);
+export const shippingMethodEnum = pgEnum("shipping_method", ["parcel", "pickup", "none"]);
+
+export const orders = pgTable(
+  "orders",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    number: serial("number").notNull(),
+    userId: uuid("user_id").references(() => users.id),
+    email: text("email").notNull(),
+    name: text("name").notNull(),
+    /** Unguessable token for a guest's order link. */
+    accessToken: text("access_token").notNull(),
+    status: orderStatusEnum("status").notNull().default("pending_payment"),
+    method: shippingMethodEnum("method").notNull(),
+    shipTo: jsonb("ship_to"),
+    subtotalCents: integer("subtotal_cents").notNull(),
+    shippingCents: integer("shipping_cents").notNull(),
+    taxCents: integer("tax_cents").notNull(),
+    giftCents: integer("gift_cents").notNull(),
+    totalCents: integer("total_cents").notNull(),
+    refundedCents: integer("refunded_cents").notNull().default(0),
+    paymentIntentId: text("payment_intent_id"),
+    reservedUntil: timestamp("reserved_until", { withTimezone: true, mode: "date" }),
+    paidAt: timestamp("paid_at", { withTimezone: true, mode: "date" }),
+    /** The saved site check that goes with the order (lib/placement), if any. */
+    siteId: uuid("site_id"),
+    /** Bumped on every state change; a stale version loses (two volunteers at once). */
+    version: integer("version").notNull().default(0),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("orders_number_key").on(t.number),
+    uniqueIndex("orders_payment_intent_key").on(t.paymentIntentId),
+    index("orders_status_idx").on(t.status, t.createdAt),
+    index("orders_user_idx").on(t.userId),
+    check("orders_amounts", sql`${t.totalCents} >= 0 and ${t.refundedCents} >= 0 and ${t.refundedCents} <= ${t.totalCents}`),
+  ],
+);
+
+export const orderLines = pgTable(
+  "order_lines",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id, { onDelete: "cascade" }),
+    modelId: uuid("model_id")
+      .notNull()
+      .references(() => houseModels.id),
+    slug: text("slug").notNull(),
+    name: text("name").notNull(),
+    unitPriceCents: integer("unit_price_cents").notNull(),
+    quantity: integer("quantity").notNull(),
+    billableLb: integer("billable_lb").notNull(),
+  },
+  (t) => [index("order_lines_order_idx").on(t.orderId), check("order_lines_quantity", sql`${t.quantity} between 1 and 10`)],
+);
+
+/** Who moved an order from which state to which, when and why. */
+export const orderEvents = pgTable(
+  "order_events",
+  {
+    id: serial("id").primaryKey(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id, { onDelete: "cascade" }),
+    fromStatus: orderStatusEnum("from_status"),
+    toStatus: orderStatusEnum("to_status").notNull(),
+    actorId: uuid("actor_id").references(() => users.id),
+    note: text("note").notNull().default(""),
+    createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [index("order_events_order_idx").on(t.orderId, t.createdAt)],
+);
+
+export const carrierEnum = pgEnum("carrier", ["ups", "usps", "fedex", "other"]);
+
+export const parcels = pgTable(
+  "parcels",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id, { onDelete: "cascade" }),
+    description: text("description").notNull(),
+    lengthIn: doublePrecision("length_in").notNull(),
+    widthIn: doublePrecision("width_in").notNull(),
+    heightIn: doublePrecision("height_in").notNull(),
+    weightLb: doublePrecision("weight_lb").notNull(),
+    billableLb: integer("billable_lb").notNull(),
+    carrier: carrierEnum("carrier"),
+    service: text("service"),
+    trackingNumber: text("tracking_number"),
+    shippedAt: timestamp("shipped_at", { withTimezone: true, mode: "date" }),
+    ...timestamps,
+  },
+  (t) => [index("parcels_order_idx").on(t.orderId)],
+);
+
+export const refunds = pgTable("refunds", {
+  id: uuid("id").primaryKey().defaultRandom(),
+  orderId: uuid("order_id")
+    .notNull()
+    .references(() => orders.id),
+  providerRefundId: text("provider_refund_id").notNull().unique(),
+  amountCents: integer("amount_cents").notNull(),
+  reason: text("reason").notNull().default(""),
+  restocked: boolean("restocked").notNull().default(false),
+  actorId: uuid("actor_id").references(() => users.id),
+  createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+});
+
+/** Conservation gifts, recorded when their payment succeeds. */
+export const gifts = pgTable(
+  "gifts",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id)
+      .unique(),
+    userId: uuid("user_id").references(() => users.id),
+    email: text("email").notNull(),
+    amountCents: integer("amount_cents").notNull(),
+    receivedAt: timestamp("received_at", { withTimezone: true, mode: "date" }).notNull(),
+  },
+  (t) => [index("gifts_user_idx").on(t.userId, t.receivedAt), index("gifts_email_idx").on(t.email)],
+);
+
+/** Payment-service events, each recorded once and processed once. */
+export const webhookEvents = pgTable("webhook_events", {
+  id: text("id").primaryKey(),
+  type: text("type").notNull(),
+  receivedAt: timestamp("received_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  processedAt: timestamp("processed_at", { withTimezone: true, mode: "date" }),
+  outcome: text("outcome").notNull().default(""),
+});
+
+export const outboxStatusEnum = pgEnum("outbox_status", ["pending", "sent", "failed"]);
+
+/** Messages written in the same transaction as the event that causes them; a sender delivers them. */
+export const outbox = pgTable(
+  "outbox",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    /** One message per cause: e.g. "order-confirmation:<orderId>". */
+    dedupeKey: text("dedupe_key").notNull(),
+    kind: text("kind").notNull(),
+    toAddress: text("to_address").notNull(),
+    subject: text("subject").notNull(),
+    payload: jsonb("payload").notNull(),
+    status: outboxStatusEnum("status").notNull().default("pending"),
+    attempts: integer("attempts").notNull().default(0),
+    nextAttemptAt: timestamp("next_attempt_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    providerId: text("provider_id"),
+    lastError: text("last_error"),
+    sentAt: timestamp("sent_at", { withTimezone: true, mode: "date" }),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex("outbox_dedupe_key").on(t.dedupeKey), index("outbox_pending_idx").on(t.status, t.nextAttemptAt)],
+);
+
+export const emailPreferences = pgTable("email_preferences", {
+  userId: uuid("user_id")
+    .primaryKey()
+    .references(() => users.id, { onDelete: "cascade" }),
+  seasonalReminders: boolean("seasonal_reminders").notNull().default(false),
+  unsubscribeToken: text("unsubscribe_token").notNull().unique(),
+  ...timestamps,
+});
+
+/** A buyer's planned site and its check (lib/placement). */
+export const sites = pgTable(
+  "sites",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id").references(() => users.id, { onDelete: "cascade" }),
+    /** For a guest: a token kept with their cart. */
+    guestToken: text("guest_token"),
+    name: text("name").notNull().default("My site"),
+    input: jsonb("input").notNull(),
+    result: jsonb("result").notNull(),
+    label: text("label").notNull(),
+    bandId: text("band_id").notNull(),
+    ...timestamps,
+  },
+  (t) => [index("sites_user_idx").on(t.userId), index("sites_guest_idx").on(t.guestToken)],
+);
+
+export type User = typeof users.$inferSelect;
+export type NewUser = typeof users.$inferInsert;
+export type HouseModelRow = typeof houseModels.$inferSelect;
+export type NewHouseModelRow = typeof houseModels.$inferInsert;
+export type OrderRow = typeof orders.$inferSelect;
+export type OrderLineRow = typeof orderLines.$inferSelect;
+export type ParcelRow = typeof parcels.$inferSelect;
+export type OutboxRow = typeof outbox.$inferSelect;
+export type SiteRow = typeof sites.$inferSelect;
+export type InspectionRow = typeof inspections.$inferSelect;
+export type StockMovementRow = typeof stockMovements.$inferSelect;

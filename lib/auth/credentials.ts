@@ -1,0 +1,39 @@
+import { eq } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { users } from "@/db/schema";
+import { signInSchema } from "./password-policy";
+import { verifyPassword } from "./passwords";
+import type { Role } from "./roles";
+import { checkSignInThrottle, recordSignInAttempt } from "./throttle";
+
+export class SignInRefused extends Error {
+  override name = "SignInRefused";
+}
+
+/** Checks an e-mail and password; throws SignInRefused with a message a person can act on. */
+export async function authenticate(
+  input: unknown,
+  ip: string,
+): Promise<{ id: string; name: string; email: string; role: Role }> {
+  const parsed = signInSchema.safeParse(input);
+  if (!parsed.success) throw new SignInRefused("Enter your e-mail address and password.");
+  const { email, password } = parsed.data;
+  const db = await getDb();
+  const verdict = await checkSignInThrottle(db, { email, ip });
+  if (verdict.throttled) throw new SignInRefused(verdict.message);
+  const [user] = await db.select().from(users).where(eq(users.email, email)).limit(1);
+  const ok = await verifyPassword(password, user?.passwordHash ?? null);
+  await recordSignInAttempt(db, { email, ip, succeeded: ok });
+  if (!ok || !user) throw new SignInRefused("That e-mail and password don't match an account here.");
+  return { id: user.id, name: user.name, email: user.email, role: user.role };
+}
+
+export function clientAddress(headers: Record<string, unknown> | Headers | undefined): string {
+  const get = (name: string): string | undefined => {
+    if (!headers) return undefined;
+    if (headers instanceof Headers) return headers.get(name) ?? undefined;
+    const value = headers[name];
+    return typeof value === "string" ? value : undefined;
+  };
+  return get("x-forwarded-for")?.split(",")[0]?.trim() || get("x-real-ip") || "local";
+}

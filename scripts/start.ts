@@ -1,0 +1,80 @@
+/**
+ * One command for the whole store: migrates the database, loads the demo data when it is empty,
+ * imports the NOAA climate normals when they are missing, starts the local stand-ins for payments,
+ * mail and uploads, and then runs Next.js (dev with --dev, else a production build and `next start`).
+ */
+import { spawn, spawnSync } from "node:child_process";
+import { existsSync } from "node:fs";
+import path from "node:path";
+import { closeDb, getDb } from "@/db/client";
+import { isEmpty, seedDemo } from "@/db/seed";
+import { importClimateIfEmpty } from "@/lib/catalog/climate-store";
+import { env } from "@/lib/config/env";
+import { startMailStandIn } from "@/lib/stand-ins/mail/server";
+import { startPaymentsStandIn } from "@/lib/stand-ins/payments/server";
+import { startUploadsStandIn } from "@/lib/stand-ins/uploads/server";
+
+const args = new Set(process.argv.slice(2));
+const dev = args.has("--dev");
+const settings = env();
+const port = new URL(settings.APP_URL).port || "3000";
+
+async function prepareDatabase() {
+  const db = await getDb();
+  if (await isEmpty(db)) {
+    console.log("• Loading the demo scenario…");
+    await seedDemo(db);
+  }
+  const imported = await importClimateIfEmpty(db, settings.NOAA_DIR);
+  if (imported) console.log(`• Imported ${imported.stations} climate stations (${imported.skipped} lines skipped).`);
+  // Release the embedded database: the Next.js server opens it next.
+  await closeDb();
+}
+
+async function startStandIns() {
+  if (!settings.useStandIns) return [];
+  const payments = await startPaymentsStandIn({
+    port: settings.PAYMENTS_PORT,
+    webhookUrl: `${settings.APP_URL}/api/webhooks/stripe`,
+    webhookSecret: settings.STRIPE_WEBHOOK_SECRET,
+    secretKey: settings.STRIPE_SECRET_KEY,
+    publishableKey: settings.STRIPE_PUBLISHABLE_KEY,
+  });
+  const mail = await startMailStandIn({ port: settings.MAIL_PORT, dataFile: path.join("var", "mail-stand-in.json") });
+  const uploads = await startUploadsStandIn({
+    port: settings.UPLOADS_PORT,
+    directory: path.join("var", "uploads"),
+    bucket: settings.S3_BUCKET,
+  });
+  console.log(`• Payments stand-in  ${payments.url}`);
+  console.log(`• Mail stand-in      ${mail.url}   (inbox)`);
+  console.log(`• Uploads stand-in   ${uploads.url}`);
+  return [payments, mail, uploads];
+}
+
+await prepareDatabase();
+const standIns = await startStandIns();
+
+const nextBin = path.join("node_modules", ".bin", "next");
+const childEnv = { ...process.env, NEXT_TELEMETRY_DISABLED: "1", NEXT_MANUAL_SIG_HANDLE: "1", PORT: port };
+if (!dev && !args.has("--no-build") && !existsSync(path.join(".next", "BUILD_ID"))) {
+  console.log("• Building the store (first start only)…");
+  const build = spawnSync(nextBin, ["build"], { stdio: "inherit", env: { ...childEnv, NODE_ENV: "production" } });
+  if (build.status !== 0) process.exit(build.status ?? 1);
+}
+console.log(`• Store              ${settings.APP_URL}`);
+const next = spawn(nextBin, [dev ? "dev" : "start", "-p", port], { stdio: "inherit", env: childEnv });
+
+let stopping = false;
+async function stop(code: number) {
+  if (stopping) return;
+  stopping = true;
+  await Promise.allSettled(standIns.map((s) => s.close()));
+  process.exit(code);
+}
+for (const signal of ["SIGINT", "SIGTERM"] as const) {
+  process.on(signal, () => {
+    next.kill("SIGTERM");
+  });
+}
+next.on("exit", (code) => void stop(code ?? 0));

@@ -1,0 +1,17 @@
+declare module "s3rver" {
+  type Options = {
+    port?: number;
+    address?: string;
+    directory: string;
+    silent?: boolean;
+    resetOnClose?: boolean;
+    allowMismatchedSignatures?: boolean;
+    vhostBuckets?: boolean;
+    configureBuckets?: { name: string; configs: string[] }[];
+  };
+  export default class S3rver {
+    constructor(options: Options);
+    run(): Promise<{ address: string; port: number }>;
+    close(): Promise<void>;
+  }
+}
