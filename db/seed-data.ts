@@ -4,13 +4,13 @@
 export const DEMO_ORGANIZATION = {
   legalName: "Cedar Hollow Wildlife Rescue, Inc.",
   displayName: "Cedar Hollow Wildlife Rescue",
-  street: "418 Old Mill Road",
+  street: "2180 Alder Bend Road",
   city: "Larkspur Falls",
-  state: "WI",
-  zip: "54990",
+  state: "OR",
+  zip: "97399",
   taxId: "00-0000000",
   email: "hello@cedarhollow.example",
-  phone: "(608) 555-0142",
+  phone: "(541) 555-0148",
 };
 
 export const DEMO_USERS = [

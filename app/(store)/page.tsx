@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { BandFinder } from "@/components/catalog/band-finder";
 import { ButtonLink } from "@/components/ui/button";
 
 const STEPS = [
@@ -29,20 +30,23 @@ export default function HomePage() {
         <div className="mx-auto grid max-w-6xl gap-8 px-4 py-14 sm:px-6 md:grid-cols-[1.2fr_1fr] md:items-center">
           <div className="flex flex-col gap-5">
             <p className="text-sm font-bold tracking-wide text-ember-300 uppercase">Cedar Hollow Wildlife Rescue</p>
-            <h1 className="font-display text-4xl font-semibold sm:text-5xl">Bat houses that bats move into.</h1>
+            <h1 className="font-display text-4xl font-semibold text-paper-50 sm:text-5xl">Bat houses that bats move into.</h1>
             <p className="max-w-prose text-lg text-paper-200">
               Built by our volunteers, measured by our workshop, matched to your summers, and sent with an install guide
               written for your house and your site. Every sale funds the care of injured and orphaned bats at our
               rescue in Larkspur Falls.
             </p>
             <div className="flex flex-wrap gap-3">
-              <ButtonLink href="/climate" size="lg">
-                Start with your climate
+              <ButtonLink href="/houses" size="lg">
+                Browse the houses
               </ButtonLink>
               <Link href="/give" className="self-center font-bold text-paper-50 underline underline-offset-4">
                 Or give to the rescue
               </Link>
             </div>
+          </div>
+          <div className="text-ink">
+            <BandFinder compact />
           </div>
         </div>
       </section>

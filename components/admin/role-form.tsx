@@ -18,8 +18,8 @@ export function RoleForm({ userId, role, name, isSelf }: { userId: string; role:
         e.preventDefault();
         startTransition(async () => {
           const result = await setRoleAction({ userId, role: value });
-          if (result.ok) toast.show({ tone: "good", message: `${name} is now: ${ROLE_LABELS[value]}.` });
-          else toast.show({ tone: "poor", message: result.error.message });
+          if (result.ok) toast.notify({ tone: "good", title: `${name} is now: ${ROLE_LABELS[value]}.` });
+          else toast.notify({ tone: "poor", title: result.error.message });
         });
       }}
     >

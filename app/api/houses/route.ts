@@ -1,0 +1,13 @@
+import { catalogQuerySchema } from "@/lib/catalog/catalog-query";
+import { toHouseCard } from "@/lib/catalog/house-card";
+import { listHouses } from "@/lib/catalog/queries";
+import { parseQuery, route } from "@/lib/http/route";
+
+export const dynamic = "force-dynamic";
+
+// Public: the catalog, filtered; a band adds a fit label to every item.
+export const GET = route({ public: true }, async ({ request }) => {
+  const query = parseQuery(request, catalogQuerySchema);
+  const items = await listHouses(query);
+  return { items: items.map(toHouseCard), total: items.length };
+});

@@ -1,0 +1,119 @@
+"use client";
+
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
+import { useEffect, useState } from "react";
+import { Alert } from "@/components/ui/alert";
+import { Checkbox } from "@/components/ui/checkbox";
+import { EmptyState } from "@/components/ui/empty-state";
+import { Select } from "@/components/ui/select";
+import { Spinner } from "@/components/ui/spinner";
+import { catalogQueryToParams, type CatalogQuery } from "@/lib/catalog/catalog-query";
+import { BAND_IDS, CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
+import type { HouseCard as HouseCardData } from "@/lib/catalog/house-card";
+import { HouseCard } from "./house-card";
+
+type Result = { items: HouseCardData[]; total: number };
+
+async function fetchHouses(query: CatalogQuery): Promise<Result> {
+  const res = await fetch(`/api/houses?${catalogQueryToParams(query)}`);
+  const body = await res.json();
+  if (!res.ok) throw new Error(body?.error?.message ?? "The catalog could not be loaded.");
+  return body as Result;
+}
+
+const PRICE_LIMITS = [10000, 15000, 20000, 30000];
+
+/** The catalog's filters and results; the first page arrives rendered by the server. */
+export function CatalogBrowser({ initialQuery, initialResult }: { initialQuery: CatalogQuery; initialResult: Result }) {
+  const [query, setQuery] = useState<CatalogQuery>(initialQuery);
+  const { data, isFetching, error } = useQuery({
+    queryKey: ["houses", catalogQueryToParams(query).toString()],
+    queryFn: () => fetchHouses(query),
+    initialData: catalogQueryToParams(query).toString() === catalogQueryToParams(initialQuery).toString() ? initialResult : undefined,
+    placeholderData: keepPreviousData,
+  });
+
+  // Keep the address in step so a filtered view can be shared or reloaded.
+  useEffect(() => {
+    const params = catalogQueryToParams(query).toString();
+    window.history.replaceState(null, "", params ? `/houses?${params}` : "/houses");
+    if (query.band) document.cookie = `rw_band=${encodeURIComponent(JSON.stringify({ id: query.band }))}; path=/; max-age=31536000; samesite=lax`;
+  }, [query]);
+
+  const update = (patch: Partial<CatalogQuery>) => setQuery((q) => ({ ...q, ...patch }));
+
+  return (
+    <div className="grid gap-8 lg:grid-cols-[16rem_1fr]">
+      <form className="flex flex-col gap-5 rounded-xl border border-paper-200 bg-white p-5 lg:self-start" aria-label="Filter houses" onSubmit={(e) => e.preventDefault()}>
+        <div className="flex flex-col gap-1.5">
+          <label htmlFor="filter-band" className="font-bold">
+            Your summers
+          </label>
+          <Select id="filter-band" value={query.band ?? ""} onChange={(e) => update({ band: (e.target.value || undefined) as BandId | undefined })}>
+            <option value="">Not chosen</option>
+            {BAND_IDS.map((id) => (
+              <option key={id} value={id}>
+                {CLIMATE_BANDS[id].label}
+              </option>
+            ))}
+          </Select>
+        </div>
+        <div className="flex flex-col gap-1.5">
+          <label htmlFor="filter-chambers" className="font-bold">
+            Chambers
+          </label>
+          <Select id="filter-chambers" value={query.chambers ?? ""} onChange={(e) => update({ chambers: e.target.value ? Number(e.target.value) : undefined })}>
+            <option value="">Any number</option>
+            <option value="2">2 or more</option>
+            <option value="4">4 or more</option>
+            <option value="6">6 or more</option>
+          </Select>
+        </div>
+        <div className="flex flex-col gap-1.5">
+          <label htmlFor="filter-mount" className="font-bold">
+            Mount
+          </label>
+          <Select id="filter-mount" value={query.mount ?? ""} onChange={(e) => update({ mount: (e.target.value || undefined) as CatalogQuery["mount"] })}>
+            <option value="">Pole or building</option>
+            <option value="pole">On a pole</option>
+            <option value="building">On a building wall</option>
+          </Select>
+        </div>
+        <div className="flex flex-col gap-1.5">
+          <label htmlFor="filter-price" className="font-bold">
+            Price up to
+          </label>
+          <Select id="filter-price" value={query.maxPriceCents ?? ""} onChange={(e) => update({ maxPriceCents: e.target.value ? Number(e.target.value) : undefined })}>
+            <option value="">Any price</option>
+            {PRICE_LIMITS.map((c) => (
+              <option key={c} value={c}>
+                ${c / 100}
+              </option>
+            ))}
+          </Select>
+        </div>
+        <Checkbox label="In stock only" checked={Boolean(query.inStock)} onChange={(e) => update({ inStock: e.target.checked || undefined })} />
+      </form>
+      <section aria-labelledby="results-heading" aria-busy={isFetching}>
+        <div className="mb-4 flex items-center gap-3">
+          <h2 id="results-heading" className="font-display text-xl font-semibold text-moss-900">
+            {data ? `${data.total} ${data.total === 1 ? "house" : "houses"}` : "Houses"}
+            {query.band ? ` for ${CLIMATE_BANDS[query.band].label.toLowerCase()}` : ""}
+          </h2>
+          {isFetching ? <Spinner label="Updating" /> : null}
+        </div>
+        {error ? <Alert tone="poor" title="The catalog could not be loaded">{(error as Error).message}</Alert> : null}
+        {data && data.items.length === 0 ? (
+          <EmptyState title="No house matches all of these filters">Try fewer filters, or a higher price limit.</EmptyState>
+        ) : null}
+        <ul className="grid gap-6 sm:grid-cols-2 xl:grid-cols-3">
+          {data?.items.map((h) => (
+            <li key={h.slug} className="flex">
+              <HouseCard house={h} />
+            </li>
+          ))}
+        </ul>
+      </section>
+    </div>
+  );
+}
