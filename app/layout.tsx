@@ -23,7 +23,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
       <body className="flex min-h-dvh flex-col">
         <Providers>
           <SiteHeader user={user ? { name: user.name, role: user.role } : null} nav={navFor(user?.role ?? null)} />
-          <main id="main" className="flex-1">
+          <main id="main" tabIndex={-1} className="flex-1 outline-none">
             {children}
           </main>
           <SiteFooter />

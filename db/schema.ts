@@ -253,6 +253,9 @@ export const orders = pgTable(
     refundedCents: integer("refunded_cents").notNull().default(0),
     paymentIntentId: text("payment_intent_id"),
     reservedUntil: timestamp("reserved_until", { withTimezone: true, mode: "date" }),
+    /** True while the order's units are reserved in the stock ledger (released on failure or expiry). */
+    stockHeld: boolean("stock_held").notNull().default(false),
+    phone: text("phone"),
     paidAt: timestamp("paid_at", { withTimezone: true, mode: "date" }),
     /** The saved site check that goes with the order (lib/placement), if any. */
     siteId: uuid("site_id"),

@@ -1,0 +1,10 @@
+import { listUsers } from "@/lib/accounts/users";
+import { route } from "@/lib/http/route";
+
+export const dynamic = "force-dynamic";
+
+// Admin only: the accounts and their roles.
+export const GET = route({ permission: "admin:users" }, async () => {
+  const users = await listUsers();
+  return { items: users.map((u) => ({ id: u.id, email: u.email, name: u.name, role: u.role })), total: users.length };
+});
