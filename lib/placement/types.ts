@@ -1,0 +1,47 @@
+// Shared shapes of the placement check (PRODUCT.md §4). Plain types: the rules stay free of
+// framework and validation imports; lib/placement/schema.ts validates what arrives from outside.
+
+export type Mount = "pole" | "building" | "tree";
+
+/** A planned site, already resolved to coordinates (a ZIP is turned into lat/lon upstream). */
+export type PlacementSite = {
+  lat: number;
+  lon: number;
+  mount: Mount;
+  heightFt: number;
+  /** Compass bearing the house face (its open bottom side and front) points to, degrees from north. */
+  facingDeg: number;
+  /** Two houses mounted back to back, the second facing facingDeg + 180°. */
+  pairedBackToBack: boolean;
+  /** One house mounted above another. */
+  stacked: boolean;
+  waterMi: number;
+  woodsEdgeFt: number;
+  clearFlightPath: boolean;
+  brightLight: boolean;
+  predators: boolean;
+};
+
+export type RuleId = "P1" | "P2" | "P3" | "P4" | "P5" | "P6" | "P7" | "P8" | "P9" | "P10";
+
+export type RuleStatus = "good" | "fair" | "poor";
+
+export type RuleResult = {
+  id: RuleId;
+  /** Short name for a table row, e.g. "Height". */
+  name: string;
+  status: RuleStatus;
+  /** The site's own value in words, e.g. "14 ft (4.27 m)". */
+  value: string;
+  /** One line a buyer can read: why this status. */
+  reason: string;
+  /** What to change; present on every fair or poor rule. */
+  change?: string;
+  /** Where the threshold comes from, in plain words safe to show (full citations sit in code). */
+  source: string;
+};
+
+/** The two figures of a season sun result that P4 needs (a SeasonSun fits). */
+export type SunSummary = { hours: number; morningShare: number };
+
+export type PlacementResult = { rules: RuleResult[]; label: RuleStatus };
