@@ -5,6 +5,7 @@ import { SiteHeader } from "@/components/site-header";
 import { Providers } from "@/components/providers";
 import { getSessionUser } from "@/lib/auth/session";
 import { navFor } from "@/lib/auth/nav";
+import { env } from "@/lib/config/env";
 import { bodyFont, displayFont } from "./fonts";
 import "./globals.css";
 
@@ -18,8 +19,17 @@ export const viewport: Viewport = { themeColor: "#1f3a2e", width: "device-width"
 
 export default async function RootLayout({ children }: { children: ReactNode }) {
   const user = await getSessionUser();
+  const settings = env();
   return (
     <html lang="en" className={`${displayFont.variable} ${bodyFont.variable}`}>
+      <head>
+        {settings.useStandIns ? (
+          // The local payments stand-in's browser script: it defines window.Stripe before the app's
+          // bundle loads, so the SDK's Elements run unchanged against the local service.
+          // eslint-disable-next-line @next/next/no-sync-scripts -- must exist before the SDK looks for it
+          <script src="/stand-ins/stripe.js" data-api-base={settings.STRIPE_API_BASE} />
+        ) : null}
+      </head>
       <body className="flex min-h-dvh flex-col">
         <Providers>
           <SiteHeader user={user ? { name: user.name, role: user.role } : null} nav={navFor(user?.role ?? null)} />

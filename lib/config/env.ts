@@ -107,11 +107,11 @@ export function parseEnv(source: NodeJS.ProcessEnv): Env {
     STRIPE_WEBHOOK_SECRET: pick("STRIPE_WEBHOOK_SECRET"),
     RESEND_API_KEY: pick("RESEND_API_KEY"),
     RESEND_BASE_URL:
-      raw.RESEND_BASE_URL ?? (raw.ROOSTWRIGHT_MODE === "local" ? `http://localhost:${raw.MAIL_PORT}` : undefined),
+      raw.RESEND_BASE_URL ?? (raw.ROOSTWRIGHT_MODE === "local" ? `http://127.0.0.1:${raw.MAIL_PORT}` : undefined),
     STRIPE_API_BASE:
-      raw.STRIPE_API_BASE ?? (raw.ROOSTWRIGHT_MODE === "local" ? `http://localhost:${raw.PAYMENTS_PORT}` : undefined),
+      raw.STRIPE_API_BASE ?? (raw.ROOSTWRIGHT_MODE === "local" ? `http://127.0.0.1:${raw.PAYMENTS_PORT}` : undefined),
     S3_ENDPOINT:
-      raw.S3_ENDPOINT ?? (raw.ROOSTWRIGHT_MODE === "local" ? `http://localhost:${raw.UPLOADS_PORT}` : undefined),
+      raw.S3_ENDPOINT ?? (raw.ROOSTWRIGHT_MODE === "local" ? `http://127.0.0.1:${raw.UPLOADS_PORT}` : undefined),
     S3_ACCESS_KEY_ID: raw.S3_ACCESS_KEY_ID ?? "S3RVER",
     S3_SECRET_ACCESS_KEY: raw.S3_SECRET_ACCESS_KEY ?? "S3RVER",
     useStandIns,

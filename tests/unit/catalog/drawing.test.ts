@@ -1,12 +1,12 @@
-import * as xml from "fast-xml-parser";
+import { XMLValidator } from "fast-xml-parser";
 import { describe, expect, it } from "vitest";
 import { houseDrawingSvg } from "@/lib/catalog/drawing";
 import { formatInches } from "@/lib/catalog/spec";
 import { SOUND_SPEC, withSpec } from "./sample-spec";
 
-// fast-xml-parser (a registry XML library, here through s3rver) checks that every drawing is
+// fast-xml-parser (a registry XML library) checks that every drawing is
 // well-formed XML: one unescaped "<" or "&" in a staff-typed name would break the whole page.
-const wellFormed = (svg: string) => xml.validate(svg);
+const wellFormed = (svg: string) => XMLValidator.validate(svg);
 
 describe("houseDrawingSvg", () => {
   const svg = houseDrawingSvg({ name: "Hollow Oak Four", spec: SOUND_SPEC });

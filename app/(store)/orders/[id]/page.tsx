@@ -1,0 +1,157 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { OrderSummary } from "@/components/checkout/order-summary";
+import { PaymentPendingRefresh } from "@/components/orders/payment-pending-refresh";
+import { PageHeader, PageShell } from "@/components/page-header";
+import { Alert } from "@/components/ui/alert";
+import { Badge } from "@/components/ui/badge";
+import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
+import { getSessionUser } from "@/lib/auth/session";
+import { getOrderForViewer } from "@/lib/checkout/order-access";
+import { formatOrderNumber } from "@/lib/checkout/order-number";
+import { getOrderHistory, getOrderLines } from "@/lib/checkout/order-queries";
+import { statusTone, statusWords } from "@/lib/checkout/order-status";
+import { formatUsd } from "@/lib/checkout/money";
+import { AppError } from "@/lib/http/errors";
+import { OrderParcels } from "@/components/orders/order-parcels";
+
+export const metadata: Metadata = { title: "Your order" };
+
+type Props = { params: Promise<{ id: string }>; searchParams: Promise<{ t?: string }> };
+const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+
+export default async function OrderPage({ params, searchParams }: Props) {
+  const [{ id }, { t }] = await Promise.all([params, searchParams]);
+  let order;
+  try {
+    order = await getOrderForViewer({ orderId: id, token: t, user: await getSessionUser() });
+  } catch (error) {
+    if (error instanceof AppError && error.code === "not_found") {
+      return (
+        <PageShell narrow>
+          <PageHeader title="We could not find that order" lead="Use the link in your confirmation e-mail, or sign in to see your orders." />
+          <Link href="/sign-in" className="font-bold underline">
+            Sign in
+          </Link>
+        </PageShell>
+      );
+    }
+    throw error;
+  }
+  const [lines, history] = await Promise.all([getOrderLines({ orderId: order.id }), getOrderHistory({ orderId: order.id })]);
+  const words = statusWords(order.status);
+  const linkSuffix = `?t=${encodeURIComponent(order.accessToken)}`;
+  const giftOnly = lines.length === 0;
+
+  return (
+    <PageShell>
+      <PageHeader title={giftOnly ? `Gift ${formatOrderNumber(order.number)}` : `Order ${formatOrderNumber(order.number)}`}>
+        <div className="flex flex-wrap items-center gap-3">
+          <Badge tone={statusTone(order.status)}>{words.label}</Badge>
+          <span className="text-ink-soft">{words.buyerNote}</span>
+        </div>
+      </PageHeader>
+      {order.status === "pending_payment" ? (
+        <div className="mb-8 flex flex-col gap-3">
+          <Alert tone="info" title="Waiting for your payment">
+            If you just paid, the confirmation is on its way; this page updates by itself.{" "}
+            <Link href={`/checkout/${order.id}${linkSuffix}`} className="font-bold underline">
+              Go to the payment page
+            </Link>
+          </Alert>
+          <PaymentPendingRefresh />
+        </div>
+      ) : null}
+      {order.paidAt ? (
+        <Alert tone="good" title={giftOnly ? "Thank you for your gift" : "Thank you: your order is paid"}>
+          A confirmation {giftOnly ? "and your gift receipt are" : "and your install guide are"} on the way to {order.email}. Keep this page&apos;s link to follow your
+          order.{" "}
+          <Link href={`/orders/${order.id}/receipt${linkSuffix}`} className="font-bold underline">
+            View your receipt
+          </Link>
+        </Alert>
+      ) : null}
+      <div className="mt-8 grid gap-10 lg:grid-cols-[1.4fr_1fr]">
+        <div className="flex flex-col gap-8">
+          {lines.length > 0 ? (
+            <section aria-labelledby="items">
+              <h2 id="items" className="font-display text-2xl font-semibold text-moss-900">
+                Houses
+              </h2>
+              <Table caption="Houses in this order" hideCaption wrapperClassName="mt-3">
+                <THead>
+                  <Tr>
+                    <Th>House</Th>
+                    <Th numeric>Quantity</Th>
+                    <Th numeric>Price</Th>
+                  </Tr>
+                </THead>
+                <TBody>
+                  {lines.map((l) => (
+                    <Tr key={l.id}>
+                      <Td>
+                        <Link href={`/houses/${l.slug}`} className="underline">
+                          {l.name}
+                        </Link>
+                      </Td>
+                      <Td numeric>{l.quantity}</Td>
+                      <Td numeric>{formatUsd(l.unitPriceCents * l.quantity)}</Td>
+                    </Tr>
+                  ))}
+                </TBody>
+              </Table>
+            </section>
+          ) : null}
+          {lines.length > 0 && order.paidAt ? <OrderParcels orderId={order.id} /> : null}
+          <section aria-labelledby="timeline">
+            <h2 id="timeline" className="font-display text-2xl font-semibold text-moss-900">
+              What has happened
+            </h2>
+            <ol className="mt-3 flex flex-col gap-3 border-l-2 border-moss-200 pl-5">
+              {history.map((h) => (
+                <li key={h.id}>
+                  <p className="font-bold">{statusWords(h.toStatus).label}</p>
+                  <p className="text-sm text-ink-soft">
+                    {when.format(h.createdAt)} UTC{h.note ? ` · ${h.note}` : ""}
+                  </p>
+                </li>
+              ))}
+            </ol>
+          </section>
+        </div>
+        <aside aria-labelledby="amounts" className="flex flex-col gap-4 self-start rounded-xl border border-paper-200 bg-white p-5">
+          <h2 id="amounts" className="font-display text-2xl font-semibold text-moss-900">
+            Amounts
+          </h2>
+          <OrderSummary method={order.method} amounts={order} />
+          {order.method === "parcel" && order.shipTo ? (
+            <div>
+              <h3 className="font-bold">Shipping to</h3>
+              <ShipTo address={order.shipTo as Record<string, string>} />
+            </div>
+          ) : order.method === "pickup" ? (
+            <p>Pickup at Cedar Hollow Wildlife Rescue, Larkspur Falls. We e-mail you when it is ready.</p>
+          ) : null}
+        </aside>
+      </div>
+    </PageShell>
+  );
+}
+
+function ShipTo({ address }: { address: Record<string, string> }) {
+  return (
+    <address className="not-italic">
+      {address.name}
+      <br />
+      {address.line1}
+      {address.line2 ? (
+        <>
+          <br />
+          {address.line2}
+        </>
+      ) : null}
+      <br />
+      {address.city}, {address.state} {address.zip}
+    </address>
+  );
+}
