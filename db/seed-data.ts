@@ -8,7 +8,7 @@ export const DEMO_ORGANIZATION = {
   city: "Larkspur Falls",
   state: "OR",
   zip: "97399",
-  taxId: "00-0000000",
+  taxId: "93-0000000",
   email: "hello@cedarhollow.example",
   phone: "(541) 555-0148",
 };

@@ -8,6 +8,8 @@ export const metadata: Metadata = { title: "Admin" };
 
 const SECTIONS = [
   { href: "/admin/users", title: "Accounts and roles", text: "Who can use the workshop, the shipping desk and this page." },
+  { href: "/admin/mail", title: "Mail", text: "Messages the store sent or is waiting to send, failures, and sending again." },
+  { href: "/admin/settings", title: "Center settings", text: "Receipt details, parcel rates and sales tax." },
 ];
 
 export default async function AdminHomePage() {
