@@ -1,0 +1,58 @@
+import { expect, test } from "@playwright/test";
+import { expectAccessible } from "./support/axe";
+
+test("a buyer finds their band from a ZIP code, browses, and sees the fit labels change with the band", async ({ page }) => {
+  await page.goto("/climate");
+  await expectAccessible(page);
+  await page.getByLabel("ZIP code").fill("85004");
+  await page.getByRole("button", { name: "Find my band" }).click();
+  const result = page.getByTestId("band-result");
+  await expect(result.getByRole("heading", { name: "Very hot summers" })).toBeVisible();
+  await expect(result.getByRole("table", { name: "Weather stations used, nearest first" })).toContainText("PHOENIX");
+  await expectAccessible(page);
+
+  await result.getByRole("link", { name: /See houses for very hot summers/ }).click();
+  await expect(page).toHaveURL(/\/houses\?band=very-hot/);
+  const saltbush = page.getByTestId("house-card").filter({ hasText: "Saltbush" });
+  const northwind = page.getByTestId("house-card").filter({ hasText: "Northwind Six" });
+  await expect(saltbush).toContainText("Suits your summers");
+  await expect(northwind).toContainText("Not for your summers");
+  await expectAccessible(page);
+
+  // The band follows the buyer: switching to cool summers flips the labels without a reload.
+  await page.getByLabel("Your summers").selectOption("cool");
+  await expect(page).toHaveURL(/band=cool/);
+  await expect(northwind).toContainText("Suits your summers");
+  await expect(saltbush).toContainText("Not for your summers");
+
+  await page.getByLabel("Chambers").selectOption("6");
+  await expect(page.getByRole("heading", { name: /^\d+ houses? for cool summers/ })).toBeVisible();
+  await expect(page.getByTestId("house-card").filter({ hasText: "Twin Ridge" })).toHaveCount(0);
+
+  await northwind.getByRole("link", { name: "Northwind Six" }).click();
+  await expect(page.getByRole("heading", { level: 1, name: "Northwind Six" })).toBeVisible();
+  await expect(page.getByRole("heading", { name: "For cool summers" })).toBeVisible();
+  await expect(page.locator("[data-criterion=D1]")).toContainText("3/4 in");
+  await expect(page.locator("[data-criterion]")).toHaveCount(11);
+  await expectAccessible(page);
+});
+
+test("a typed July high in °C works, and an unknown ZIP gets a clear message", async ({ page }) => {
+  await page.goto("/climate");
+  await page.getByLabel("ZIP code").fill("00000");
+  await page.getByRole("button", { name: "Find my band" }).click();
+  await expect(page.getByText(/ZIP/).filter({ hasText: /not|unknown|find/i }).first()).toBeVisible();
+  await page.getByLabel("My July high").check();
+  await page.getByLabel("Average daily high in July").fill("30");
+  await page.getByLabel("Unit").selectOption("C");
+  await page.getByRole("button", { name: "Find my band" }).click();
+  // 30 °C = 86 °F: warm summers.
+  await expect(page.getByTestId("band-result").getByRole("heading", { name: "Warm summers" })).toBeVisible();
+});
+
+test("the home page offers the band finder and the catalog", async ({ page }) => {
+  await page.goto("/");
+  await expect(page.getByRole("form", { name: "Find your climate band" })).toBeVisible();
+  await page.getByRole("link", { name: "Browse the houses" }).first().click();
+  await expect(page.getByRole("heading", { level: 1, name: "Bat houses" })).toBeVisible();
+});
