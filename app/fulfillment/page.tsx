@@ -1,32 +1,27 @@
 import type { Metadata } from "next";
+import { QueueBrowser } from "@/components/fulfillment/queue-browser";
 import { PageHeader, PageShell } from "@/components/page-header";
-import { Card } from "@/components/ui/card";
 import { requirePageUser } from "@/lib/auth/guard";
-import { countOrdersByStatus } from "@/lib/fulfillment/queries";
+import { listQueueOrders, summarizeQueue } from "@/lib/fulfillment/queue";
+import { queueParamsFromSearch } from "@/lib/fulfillment/queue-params";
 
 export const metadata: Metadata = { title: "Shipping desk" };
 
-const WAITING = [
-  ["paid", "Waiting to pack"],
-  ["packing", "Being packed"],
-  ["packed", "Packed, not shipped"],
-  ["ready_for_pickup", "Waiting for pickup"],
-] as const;
+type Props = { searchParams: Promise<Record<string, string | string[] | undefined>> };
 
-export default async function FulfillmentHomePage() {
+// The queue of paid orders. The first page arrives rendered; filters, sorting and paging then
+// ask the JSON route (app/api/fulfillment/orders) without reloading the page.
+export default async function ShippingDeskPage({ searchParams }: Props) {
   await requirePageUser("fulfillment:orders", "/fulfillment");
-  const counts = await countOrdersByStatus();
+  const params = queueParamsFromSearch(await searchParams);
+  const [summary, firstPage] = await Promise.all([summarizeQueue(), listQueueOrders({ params })]);
   return (
     <PageShell>
-      <PageHeader title="Shipping desk" lead="Paid orders waiting for packing, shipping or pickup." />
-      <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
-        {WAITING.map(([status, label]) => (
-          <Card key={status}>
-            <p className="text-ink-soft">{label}</p>
-            <p className="font-display text-3xl font-semibold text-moss-900">{counts[status] ?? 0}</p>
-          </Card>
-        ))}
-      </div>
+      <PageHeader
+        title="Shipping desk"
+        lead="Paid orders waiting to be packed, shipped or collected. Start with the one waiting longest."
+      />
+      <QueueBrowser initialParams={params} initialPage={firstPage} summary={summary} now={new Date().toISOString()} />
     </PageShell>
   );
 }

@@ -87,6 +87,7 @@ export type TransitionRefusal =
   | "not_allowed"
   | "role_not_allowed"
   | "reason_required"
+  | "no_parcels"
   | "parcels_not_shipped";
 
 export type TransitionCheck =
@@ -99,7 +100,10 @@ export type TransitionRequest = {
   role: TransitionActor;
   /** Required for an admin correction. */
   reason?: string;
-  /** Required to move to shipped: the order counts as shipped only once every parcel has tracking. */
+  /**
+   * Required to move to packed (at least one box recorded) and to shipped (the order counts as
+   * shipped only once every box has tracking).
+   */
   parcels?: { total: number; tracked: number };
 };
 
@@ -170,6 +174,11 @@ export function canTransition(request: TransitionRequest): TransitionCheck {
       "reason_required",
       "Say why this order is going back a step; the reason is kept with the order.",
     );
+  }
+  // Common practice, no source: a parcel order is boxed and weighed only when its boxes are on
+  // record, so the shipping step has something to put tracking numbers on.
+  if (to === "packed" && transition.kind === "advance" && (request.parcels?.total ?? 0) < 1) {
+    return refuse("no_parcels", "Record at least one box, with its size and weight, first.");
   }
   if (to === "shipped" && transition.kind === "advance") {
     const { total = 0, tracked = 0 } = request.parcels ?? {};

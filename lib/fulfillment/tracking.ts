@@ -11,6 +11,10 @@ import {
 export const CARRIERS = ["ups", "usps", "fedex", "other"] as const;
 export type Carrier = (typeof CARRIERS)[number];
 
+export function isCarrier(value: unknown): value is Carrier {
+  return typeof value === "string" && (CARRIERS as readonly string[]).includes(value);
+}
+
 export const CARRIER_LABELS: Record<Carrier, string> = {
   ups: "UPS",
   usps: "USPS",

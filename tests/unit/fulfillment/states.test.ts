@@ -234,6 +234,21 @@ describe("canTransition: guards and messages", () => {
     });
   });
 
+  it("marks a parcel order packed only with at least one box on record", () => {
+    const pack = { from: "packing", to: "packed", method: "parcel", role: "fulfillment" } as const;
+    expect(canTransition(pack)).toMatchObject({ ok: false, code: "no_parcels" });
+    expect(canTransition({ ...pack, parcels: { total: 0, tracked: 0 } })).toMatchObject({
+      ok: false,
+      code: "no_parcels",
+      message: "Record at least one box, with its size and weight, first.",
+    });
+    expect(canTransition({ ...pack, parcels: { total: 1, tracked: 0 } })).toEqual({ ok: true, kind: "advance" });
+    // Stepping back to packed (an admin's correction) keeps the boxes it has; no count needed.
+    expect(
+      canTransition({ from: "shipped", to: "packed", method: "parcel", role: "admin", reason: "Label misprinted." }),
+    ).toEqual({ ok: true, kind: "correction" });
+  });
+
   it("explains refusals in the store's words", () => {
     expect(
       canTransition({ from: "paid", to: "cancelled", method: "parcel", role: "fulfillment" }),

@@ -9,16 +9,16 @@ import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
 import { getSessionUser } from "@/lib/auth/session";
 import { getOrderForViewer } from "@/lib/checkout/order-access";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
-import { getOrderHistory, getOrderLines } from "@/lib/checkout/order-queries";
+import { getOrderLines } from "@/lib/checkout/order-queries";
 import { statusTone, statusWords } from "@/lib/checkout/order-status";
 import { formatUsd } from "@/lib/checkout/money";
 import { AppError } from "@/lib/http/errors";
 import { OrderParcels } from "@/components/orders/order-parcels";
+import { OrderTimeline } from "@/components/orders/order-timeline";
 
 export const metadata: Metadata = { title: "Your order" };
 
 type Props = { params: Promise<{ id: string }>; searchParams: Promise<{ t?: string }> };
-const when = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
 
 export default async function OrderPage({ params, searchParams }: Props) {
   const [{ id }, { t }] = await Promise.all([params, searchParams]);
@@ -38,7 +38,7 @@ export default async function OrderPage({ params, searchParams }: Props) {
     }
     throw error;
   }
-  const [lines, history] = await Promise.all([getOrderLines({ orderId: order.id }), getOrderHistory({ orderId: order.id })]);
+  const lines = await getOrderLines({ orderId: order.id });
   const words = statusWords(order.status);
   const linkSuffix = `?t=${encodeURIComponent(order.accessToken)}`;
   const giftOnly = lines.length === 0;
@@ -103,21 +103,7 @@ export default async function OrderPage({ params, searchParams }: Props) {
             </section>
           ) : null}
           {lines.length > 0 && order.paidAt ? <OrderParcels orderId={order.id} /> : null}
-          <section aria-labelledby="timeline">
-            <h2 id="timeline" className="font-display text-2xl font-semibold text-moss-900">
-              What has happened
-            </h2>
-            <ol className="mt-3 flex flex-col gap-3 border-l-2 border-moss-200 pl-5">
-              {history.map((h) => (
-                <li key={h.id}>
-                  <p className="font-bold">{statusWords(h.toStatus).label}</p>
-                  <p className="text-sm text-ink-soft">
-                    {when.format(h.createdAt)} UTC{h.note ? ` · ${h.note}` : ""}
-                  </p>
-                </li>
-              ))}
-            </ol>
-          </section>
+          <OrderTimeline orderId={order.id} />
         </div>
         <aside aria-labelledby="amounts" className="flex flex-col gap-4 self-start rounded-xl border border-paper-200 bg-white p-5">
           <h2 id="amounts" className="font-display text-2xl font-semibold text-moss-900">

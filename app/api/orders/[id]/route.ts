@@ -24,6 +24,7 @@ export const GET = route<{ id: string }>({ public: true }, async ({ request, par
     totalCents: order.totalCents,
     refundedCents: order.refundedCents,
     paidAt: order.paidAt,
-    history: history.map((h) => ({ from: h.fromStatus, to: h.toStatus, note: h.note, at: h.createdAt })),
+    // Notes are staff-facing (correction reasons); the buyer sees states and times only.
+    history: history.map((h) => ({ from: h.fromStatus, to: h.toStatus, at: h.createdAt })),
   };
 });

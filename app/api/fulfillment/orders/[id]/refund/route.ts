@@ -1,0 +1,18 @@
+import { refundShippedOrder } from "@/lib/fulfillment/admin-refunds";
+import { dollarsToCents, refundSchema } from "@/lib/fulfillment/schemas";
+import { parseJson, route } from "@/lib/http/route";
+
+export const dynamic = "force-dynamic";
+
+// Admin: refund a shipped or collected order, all or part, without taking stock back.
+export const POST = route<{ id: string }>({ permission: "admin:refunds" }, async ({ request, params, user }) => {
+  const input = await parseJson(request, refundSchema);
+  const order = await refundShippedOrder({
+    orderId: params.id,
+    version: input.version,
+    amountCents: dollarsToCents(input.amount),
+    reason: input.reason,
+    actor: user!,
+  });
+  return { id: order.id, status: order.status, version: order.version, refundedCents: order.refundedCents };
+});

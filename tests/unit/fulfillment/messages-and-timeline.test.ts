@@ -1,0 +1,69 @@
+import { describe, expect, it } from "vitest";
+import { messagesForArrival } from "@/lib/fulfillment/messages";
+import { refusalError } from "@/lib/fulfillment/refusals";
+import { canTransition } from "@/lib/fulfillment/states";
+import { buyerTimeline } from "@/lib/fulfillment/timeline";
+
+// Common practice, no source: a shop mails the buyer when the parcel leaves, when it arrives and
+// when a pickup is ready; the dedupe keys are the outbox contract (lib/mail/outbox.ts).
+
+const order = { id: "0b0c5a3e-0000-4000-8000-000000000001", number: 42, email: "wren@example.org" };
+
+describe("e-mails on arrival in a state", () => {
+  it("queues the shipped, delivered (+ install guide) and ready-for-pickup messages, one key each", () => {
+    expect(messagesForArrival({ order, to: "shipped" })).toEqual([
+      { kind: "shipped", dedupeKey: `shipped:${order.id}`, to: order.email, subject: "Your order RW-00042 is on its way", payload: { orderId: order.id } },
+    ]);
+    expect(messagesForArrival({ order, to: "delivered" }).map((m) => [m.kind, m.dedupeKey, m.payload])).toEqual([
+      ["delivered", `delivered:${order.id}`, { orderId: order.id }],
+      ["install-guide", `install-guide:delivered:${order.id}`, { orderId: order.id, occasion: "delivered" }],
+    ]);
+    expect(messagesForArrival({ order, to: "ready_for_pickup" }).map((m) => m.dedupeKey)).toEqual([`ready-for-pickup:${order.id}`]);
+  });
+
+  it("sends nothing for the bench steps", () => {
+    for (const to of ["packing", "packed", "picked_up", "cancelled"] as const) expect(messagesForArrival({ order, to })).toEqual([]);
+  });
+});
+
+describe("refusals as HTTP errors", () => {
+  it("maps the wrong role to 403, a missing reason to 400 on its field, and a wrong step to 409", () => {
+    const role = canTransition({ from: "paid", to: "cancelled", method: "parcel", role: "fulfillment" });
+    const reason = canTransition({ from: "packed", to: "packing", method: "parcel", role: "admin" });
+    const step = canTransition({ from: "paid", to: "shipped", method: "parcel", role: "admin" });
+    const boxes = canTransition({ from: "packing", to: "packed", method: "parcel", role: "fulfillment", parcels: { total: 0, tracked: 0 } });
+    if (role.ok || reason.ok || step.ok || boxes.ok) throw new Error("expected refusals");
+    expect(refusalError(role).status).toBe(403);
+    expect(refusalError(reason)).toMatchObject({ status: 400, fields: { reason: reason.message } });
+    expect(refusalError(step).status).toBe(409);
+    expect(boxes.code).toBe("no_parcels");
+    expect(refusalError(boxes).status).toBe(409);
+  });
+});
+
+describe("the buyer's timeline", () => {
+  const at = (m: number) => new Date(Date.UTC(2026, 2, 1, 12, m));
+  it("shows state changes in order, in our words, and hides repeated attempts", () => {
+    const entries = buyerTimeline([
+      { fromStatus: "paid", toStatus: "packing", createdAt: at(3) },
+      { fromStatus: null, toStatus: "pending_payment", createdAt: at(0) },
+      { fromStatus: "pending_payment", toStatus: "pending_payment", createdAt: at(1) },
+      { fromStatus: "pending_payment", toStatus: "paid", createdAt: at(2) },
+    ]);
+    expect(entries.map((e) => e.title)).toEqual(["Awaiting payment", "In the workshop queue", "On the packing bench"]);
+    expect(entries.at(-1)?.detail).toBe("A volunteer is checking and packing your house now.");
+  });
+
+  it("says plainly when the center stepped back, without the staff's reason", () => {
+    const entries = buyerTimeline([
+      { fromStatus: "packed", toStatus: "shipped", createdAt: at(1) },
+      { fromStatus: "shipped", toStatus: "packed", createdAt: at(2) },
+      { fromStatus: "pending_payment", toStatus: "expired", createdAt: at(3) },
+    ]);
+    expect(entries.map((e) => [e.title, e.corrected])).toEqual([
+      ["With the carrier", false],
+      ["Back to: Boxed and weighed", true],
+      ["Checkout closed", false],
+    ]);
+  });
+});
