@@ -1,25 +1,55 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PageHeader, PageShell } from "@/components/page-header";
+import { formatDay } from "@/components/staff/status-badges";
+import { Badge } from "@/components/ui/badge";
+import { ButtonLink } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
 import { requirePageUser } from "@/lib/auth/guard";
-import { countModelsByStatus, listLowStockModels } from "@/lib/staff/queries";
+import {
+  countModelsByStatus,
+  listCertificationsDue,
+  listLowStockModels,
+} from "@/lib/staff/queries";
 
 export const metadata: Metadata = { title: "Workshop" };
 
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+function dueWords(
+  m: { certState: string; certWords: string; expiresAt: string | null },
+  now: Date,
+): string {
+  if (m.certState !== "certified" || !m.expiresAt) return m.certWords;
+  const days = Math.ceil((Date.parse(m.expiresAt) - now.getTime()) / DAY_MS);
+  return days <= 1 ? "Lapses tomorrow" : `Lapses in ${days} days`;
+}
+
 export default async function StaffHomePage() {
   await requirePageUser("staff:models", "/staff");
-  const [counts, lowStock] = await Promise.all([countModelsByStatus(), listLowStockModels()]);
+  const now = new Date();
+  const [counts, lowStock, due] = await Promise.all([
+    countModelsByStatus(),
+    listLowStockModels(),
+    listCertificationsDue({ now }),
+  ]);
   return (
     <PageShell>
-      <PageHeader title="Workshop" lead="House models, inspections and stock." />
+      <PageHeader title="Workshop" lead="House models, inspections and stock.">
+        <div className="flex flex-wrap gap-2">
+          <ButtonLink href="/staff/models">All models</ButtonLink>
+          <ButtonLink href="/staff/models/new" variant="secondary">
+            List a new model
+          </ButtonLink>
+        </div>
+      </PageHeader>
       <div className="grid gap-4 sm:grid-cols-3">
         {(
           [
-            ["On sale", counts.published],
-            ["Drafts", counts.draft],
-            ["Retired", counts.retired],
+            ["On sale", counts.published, "published"],
+            ["Drafts", counts.draft, "draft"],
+            ["Retired", counts.retired, "retired"],
           ] as const
         ).map(([label, n]) => (
           <Card key={label}>
@@ -28,27 +58,101 @@ export default async function StaffHomePage() {
           </Card>
         ))}
       </div>
-      <section className="mt-10" aria-labelledby="low-stock">
-        <h2 id="low-stock" className="font-display text-2xl font-semibold text-moss-900">
-          Running low
-        </h2>
-        {lowStock.length === 0 ? (
-          <EmptyState title="Every house on sale is above its low-stock mark" description="Nothing to rebuild right now." />
-        ) : (
-          <ul className="mt-3 divide-y divide-paper-200 rounded-lg border border-paper-200 bg-white">
-            {lowStock.map((m) => (
-              <li key={m.slug} className="flex items-center justify-between px-4 py-3">
-                <Link href={`/houses/${m.slug}`} className="font-bold text-moss-800 underline">
-                  {m.name}
-                </Link>
-                <span>
-                  {m.stock} left (mark: {m.lowStockThreshold})
-                </span>
-              </li>
-            ))}
-          </ul>
-        )}
-      </section>
+
+      <div className="mt-10 grid gap-10 lg:grid-cols-2">
+        <section aria-labelledby="low-stock">
+          <h2 id="low-stock" className="font-display text-2xl font-semibold text-moss-900">
+            Running low
+          </h2>
+          <p className="mt-1 text-ink-soft">Models on sale at or under their low-stock mark.</p>
+          {lowStock.length === 0 ? (
+            <EmptyState
+              className="mt-3"
+              level={3}
+              title="Every house on sale is above its low-stock mark"
+            >
+              Nothing to rebuild right now.
+            </EmptyState>
+          ) : (
+            <ul
+              className="mt-3 divide-y divide-paper-200 rounded-xl border border-paper-300 bg-paper-50 shadow-card"
+              data-testid="low-stock-list"
+            >
+              {lowStock.map((m) => (
+                <li
+                  key={m.slug}
+                  className="flex flex-wrap items-center justify-between gap-2 px-4 py-3"
+                >
+                  <span className="flex flex-col">
+                    <Link
+                      href={`/staff/models/${m.slug}/stock`}
+                      className="font-bold text-moss-800 underline"
+                    >
+                      {m.name}
+                    </Link>
+                    <span className="text-sm text-ink-soft">{m.builderName}</span>
+                  </span>
+                  <span
+                    className={
+                      m.stock === 0 ? "font-bold text-berry-700" : "font-bold text-ember-900"
+                    }
+                  >
+                    {m.stock === 0 ? "None left" : `${m.stock} left`}{" "}
+                    <span className="font-normal text-ink-soft">(mark {m.lowStockThreshold})</span>
+                  </span>
+                </li>
+              ))}
+            </ul>
+          )}
+        </section>
+
+        <section aria-labelledby="due">
+          <h2 id="due" className="font-display text-2xl font-semibold text-moss-900">
+            Inspections due
+          </h2>
+          <p className="mt-1 text-ink-soft">
+            Models on sale whose certification lapses within 30 days, or has lapsed.
+          </p>
+          {due.length === 0 ? (
+            <EmptyState
+              className="mt-3"
+              level={3}
+              title="No certification lapses in the next 30 days"
+            >
+              Every model on sale has a recent passing inspection.
+            </EmptyState>
+          ) : (
+            <ul
+              className="mt-3 divide-y divide-paper-200 rounded-xl border border-paper-300 bg-paper-50 shadow-card"
+              data-testid="due-list"
+            >
+              {due.map((m) => (
+                <li
+                  key={m.slug}
+                  className="flex flex-wrap items-center justify-between gap-2 px-4 py-3"
+                >
+                  <span className="flex flex-col">
+                    <Link
+                      href={`/staff/models/${m.slug}/inspections`}
+                      className="font-bold text-moss-800 underline"
+                    >
+                      {m.name}
+                    </Link>
+                    <span className="text-sm text-ink-soft">
+                      {m.expiresAt
+                        ? `Valid until ${formatDay(m.expiresAt)}`
+                        : "No valid inspection"}
+                    </span>
+                  </span>
+                  <Badge tone={m.certState === "certified" ? "warn" : "poor"}>
+                    {dueWords(m, now)}
+                  </Badge>
+                </li>
+              ))}
+            </ul>
+          )}
+        </section>
+      </div>
     </PageShell>
   );
 }

@@ -19,6 +19,7 @@ import { cartActions, MAX_PER_LINE, useCart } from "@/lib/checkout/cart-store";
 import { formatUsd } from "@/lib/checkout/money";
 import { addressSchema, contactSchema } from "@/lib/checkout/schemas";
 import { US_STATE_CODES, US_STATES } from "@/lib/checkout/us-states";
+import { readSavedSite, useSavedSite } from "@/lib/placement/saved-site-store";
 import { GiftPicker, giftDollarsToCents } from "./gift-picker";
 import { OrderSummary } from "./order-summary";
 
@@ -35,15 +36,6 @@ type ApiError = { code: string; message: string; fields?: Record<string, string>
 const detailsSchema = z.object({ contact: contactSchema, address: addressSchema.partial() });
 type Details = z.infer<typeof detailsSchema>;
 
-function readSavedSite(): { id: string; guestToken?: string; name?: string; label?: string } | null {
-  try {
-    const raw = window.localStorage.getItem("roostwright.site.v1");
-    return raw ? JSON.parse(raw) : null;
-  } catch {
-    return null;
-  }
-}
-
 async function postJson<T>(url: string, body: unknown): Promise<T> {
   const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
   const json = await res.json();
@@ -55,6 +47,7 @@ async function postJson<T>(url: string, body: unknown): Promise<T> {
 export function CartView({ defaultContact }: { defaultContact: { name: string; email: string } | null }) {
   const router = useRouter();
   const cart = useCart();
+  const { site: savedSite } = useSavedSite();
   const [method, setMethod] = useState<"parcel" | "pickup">("parcel");
   const [gift, setGift] = useState("");
   const [submitError, setSubmitError] = useState<string | null>(null);
@@ -245,6 +238,18 @@ export function CartView({ defaultContact }: { defaultContact: { name: string; e
             }}
           />
         ) : null}
+        {savedSite ? (
+          <p className="text-sm" data-testid="saved-site-note">
+            Your saved site <strong>{savedSite.name}</strong> goes with this order; your install guide is written for it.
+          </p>
+        ) : (
+          <p className="text-sm text-ink-soft">
+            <Link href="/placement" className="underline">
+              Check the spot you have in mind
+            </Link>{" "}
+            and your install guide will be written for it.
+          </p>
+        )}
         <p className="text-sm text-ink-soft">
           Shipping rates and sales tax are the center&apos;s own settings. Tax applies to the houses only, never to a gift.
         </p>

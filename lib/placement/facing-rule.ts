@@ -96,3 +96,24 @@ export function checkFacing(site: PlacementSite): RuleResult {
       : `Turn the house to face ${idealWords}.`,
   };
 }
+
+export type FacingSector = { from: number; to: number; status: Exclude<RuleStatus, "poor"> };
+
+/**
+ * The good and fair sectors of P3 as compass arcs, clockwise from `from` to `to`, for drawing a
+ * dial; everything outside them is poor. Mirroring reverses the direction of travel, so a
+ * southern sector runs from the mirror of `to` to the mirror of `from`.
+ */
+export function listFacingSectors({ lat }: { lat: number }): FacingSector[] {
+  const north: FacingSector[] = [
+    { from: FAIR_FROM, to: GOOD_FROM, status: "fair" },
+    { from: GOOD_FROM, to: GOOD_TO, status: "good" },
+    { from: GOOD_TO, to: FAIR_TO, status: "fair" },
+  ];
+  if (getHemisphere(lat) === "north") return north;
+  return north.map(({ from, to, status }) => ({
+    from: mirrorBearing(to),
+    to: mirrorBearing(from),
+    status,
+  }));
+}

@@ -56,6 +56,11 @@ export type SeasonSun = {
   morningHours: number;
   morningShare: number;
   byDate: SeasonDay[];
+  /**
+   * Mean minutes of direct sun in each local solar hour over the 8 season days (24 entries, as
+   * SunDay.byHour): the season's hour-by-hour shape for a chart. Sums to hours × 60.
+   */
+  meanByHour: number[];
   /** Midsummer at the site: June 21 in the north, December 21 in the south. */
   solstice: SunDay;
 };
@@ -204,6 +209,10 @@ export function seasonSunHours({
       hours: h,
       morningHours: m,
     })),
+    meanByHour: Array.from(
+      { length: 24 },
+      (_, hour) => days.reduce((sum, d) => sum + (d.byHour[hour] ?? 0), 0) / days.length,
+    ),
     solstice: sunHoursOnFace({ lat, lon, facingDeg, date: solsticeDate }),
   };
 }

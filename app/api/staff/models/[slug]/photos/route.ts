@@ -19,30 +19,47 @@ export const GET = route<{ slug: string }>({ permission: "staff:models" }, async
 });
 
 /** One photo per request (multipart: `file` and `altText`), so each file has its own progress. */
-export const POST = route<{ slug: string }>({ permission: "staff:models" }, async ({ request, params }) => {
-  const contentType = request.headers.get("content-type") ?? "";
-  if (!contentType.toLowerCase().startsWith("multipart/form-data")) {
-    throw new AppError("bad_request", "Send the photo as multipart/form-data with a file and its alt text.");
-  }
-  const body = await readLimitedBody({ request, maxBytes: MAX_UPLOAD_BYTES + MULTIPART_SLACK_BYTES });
-  let form: FormData;
-  try {
-    form = await new Response(body as BodyInit, { headers: { "content-type": contentType } }).formData();
-  } catch {
-    throw new AppError("bad_request", "The upload could not be read as a form. Please try again.");
-  }
-  const file = form.get("file");
-  if (!(file instanceof Blob)) throw new AppError("bad_request", "Choose a photo to add.", { file: "Choose a photo to add." });
-  const fields = photoUploadFieldsSchema.safeParse({
-    altText: form.get("altText") ?? undefined,
-    fileName: file instanceof File ? file.name : "",
-  });
-  if (!fields.success) throw badInput(fields.error);
-  const photo = await addModelPhoto({
-    slug: params.slug,
-    bytes: new Uint8Array(await file.arrayBuffer()),
-    fileName: fields.data.fileName,
-    altText: fields.data.altText,
-  });
-  return Response.json({ photo }, { status: 201 });
-});
+export const POST = route<{ slug: string }>(
+  { permission: "staff:models" },
+  async ({ request, params }) => {
+    const contentType = request.headers.get("content-type") ?? "";
+    if (!contentType.toLowerCase().startsWith("multipart/form-data")) {
+      throw new AppError(
+        "bad_request",
+        "Send the photo as multipart/form-data with a file and its alt text.",
+      );
+    }
+    const body = await readLimitedBody({
+      request,
+      maxBytes: MAX_UPLOAD_BYTES + MULTIPART_SLACK_BYTES,
+    });
+    let form: FormData;
+    try {
+      form = await new Response(body as BodyInit, {
+        headers: { "content-type": contentType },
+      }).formData();
+    } catch {
+      throw new AppError(
+        "bad_request",
+        "The upload could not be read as a form. Please try again.",
+      );
+    }
+    const file = form.get("file");
+    if (!(file instanceof Blob))
+      throw new AppError("bad_request", "Choose a photo to add.", {
+        file: "Choose a photo to add.",
+      });
+    const fields = photoUploadFieldsSchema.safeParse({
+      altText: form.get("altText") ?? undefined,
+      fileName: file instanceof File ? file.name : "",
+    });
+    if (!fields.success) throw badInput(fields.error);
+    const photo = await addModelPhoto({
+      slug: params.slug,
+      bytes: new Uint8Array(await file.arrayBuffer()),
+      fileName: fields.data.fileName,
+      altText: fields.data.altText,
+    });
+    return Response.json({ photo }, { status: 201 });
+  },
+);

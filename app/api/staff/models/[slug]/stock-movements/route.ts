@@ -9,5 +9,8 @@ export const GET = route<{ slug: string }>({ permission: "staff:stock" }, async 
   const model = await getStaffModelBySlug({ slug: params.slug });
   if (!model) throw new AppError("not_found", "There is no house model at that address.");
   const items = await listStockMovements({ modelId: model.row.id });
-  return { model: { id: model.row.id, slug: model.row.slug, name: model.row.name, stock: model.row.stock }, items };
+  return {
+    model: { id: model.row.id, slug: model.row.slug, name: model.row.name, stock: model.row.stock },
+    items,
+  };
 });
