@@ -5,7 +5,7 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { z } from "zod";
 import { Alert } from "@/components/ui/alert";
 import { Button, ButtonLink } from "@/components/ui/button";
@@ -55,8 +55,8 @@ export function CartView({ defaultContact }: { defaultContact: { name: string; e
     resolver: zodResolver(detailsSchema),
     defaultValues: { contact: defaultContact ?? { name: "", email: "" }, address: { name: "", line1: "", line2: "", city: "", state: undefined, zip: "" } },
   });
-  const state = form.watch("address.state");
-  const zip = form.watch("address.zip") ?? "";
+  const state = useWatch({ control: form.control, name: "address.state" });
+  const zip = useWatch({ control: form.control, name: "address.zip" }) ?? "";
   const giftCents = giftDollarsToCents(gift);
   const giftError = giftCents === null || (giftCents !== 0 && (giftCents < 100 || giftCents > 1_000_000)) ? "A gift is between $1 and $10,000." : undefined;
   const haveShipTo = method === "parcel" && state && /^\d{5}(-\d{4})?$/.test(zip.trim());

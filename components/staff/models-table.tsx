@@ -55,6 +55,7 @@ export function ModelsTable({ initial }: { initial: ModelsPage }) {
   });
 
   const sorting: SortingState = [{ id: query.sort, desc: query.dir === "desc" }];
+  // eslint-disable-next-line react-hooks/incompatible-library -- TanStack Table returns fresh functions each render; nothing here is memoized around them
   const table = useReactTable({
     data: data?.items ?? [],
     columns: COLUMNS,
