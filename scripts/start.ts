@@ -40,10 +40,11 @@ async function startStandIns() {
     secretKey: settings.STRIPE_SECRET_KEY,
     publishableKey: settings.STRIPE_PUBLISHABLE_KEY,
   });
-  const mail = await startMailStandIn({ port: settings.MAIL_PORT, dataFile: path.join("var", "mail-stand-in.json") });
+  // The inbox lives beside the data directory, so a fresh data directory (the e2e run) starts with an empty inbox.
+  const mail = await startMailStandIn({ port: settings.MAIL_PORT, dataFile: path.join(path.dirname(settings.DATA_DIR), "mail-stand-in.json") });
   const uploads = await startUploadsStandIn({
     port: settings.UPLOADS_PORT,
-    directory: path.join("var", "uploads"),
+    directory: path.join(path.dirname(settings.DATA_DIR), "uploads"),
     bucket: settings.S3_BUCKET,
   });
   console.log(`• Payments stand-in  ${payments.url}`);

@@ -2,6 +2,8 @@ import { and, eq, gte, sql } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { houseModels, stockMovements } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
+import { crossesLowStock } from "@/lib/mail/low-stock";
+import { queueLowStockAlert } from "@/lib/mail/low-stock-alert";
 
 export type StockMovementKind = "received" | "adjusted" | "reserved" | "sold" | "released";
 
@@ -29,7 +31,7 @@ export async function moveStock(tx: DbOrTx, input: StockMovementInput): Promise<
     .update(houseModels)
     .set({ stock: sql`${houseModels.stock} + ${input.delta}` })
     .where(and(eq(houseModels.id, input.modelId), gte(sql`${houseModels.stock} + ${input.delta}`, 0)))
-    .returning({ stock: houseModels.stock });
+    .returning({ stock: houseModels.stock, threshold: houseModels.lowStockThreshold, name: houseModels.name });
   if (!row) {
     const [exists] = await tx.select({ stock: houseModels.stock }).from(houseModels).where(eq(houseModels.id, input.modelId));
     if (!exists) throw new AppError("not_found", "No house model has that id.");
@@ -50,5 +52,9 @@ export async function moveStock(tx: DbOrTx, input: StockMovementInput): Promise<
     batch: input.batch ?? null,
     builderName: input.builderName ?? null,
   });
+  // The staff alert rides in the same transaction: it exists exactly when the movement does.
+  if (crossesLowStock({ before: row.stock - input.delta, after: row.stock, threshold: row.threshold })) {
+    await queueLowStockAlert(tx, { modelId: input.modelId, modelName: row.name, stockAfter: row.stock, threshold: row.threshold });
+  }
   return { stockAfter: row.stock };
 }

@@ -1,0 +1,51 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { forgotPasswordAction } from "@/app/(auth)/forgot-password/actions";
+import { Alert } from "@/components/ui/alert";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { FormError } from "@/components/ui/form-error";
+import { Input } from "@/components/ui/input";
+import { forgotPasswordSchema, type ForgotPassword } from "@/lib/mail/password-reset-schemas";
+
+export function ForgotPasswordForm() {
+  const [error, setError] = useState<string | null>(null);
+  const [answer, setAnswer] = useState<string | null>(null);
+  const form = useForm<ForgotPassword>({
+    resolver: zodResolver(forgotPasswordSchema),
+    defaultValues: { email: "" },
+  });
+  const { errors, isSubmitting } = form.formState;
+
+  const onSubmit = form.handleSubmit(async (values) => {
+    setError(null);
+    const result = await forgotPasswordAction(values);
+    if (!result.ok) {
+      const field = result.error.fields?.email;
+      if (field) form.setError("email", { message: field });
+      setError(result.error.message);
+      return;
+    }
+    setAnswer(result.data.message);
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
+      <FormError message={error} />
+      <Field label="E-mail" error={errors.email?.message} required>
+        <Input type="email" autoComplete="email" {...form.register("email")} />
+      </Field>
+      <Button type="submit" loading={isSubmitting}>
+        Send the link
+      </Button>
+      {answer ? (
+        <Alert tone="good" title="Check your inbox" live>
+          {answer}
+        </Alert>
+      ) : null}
+    </form>
+  );
+}

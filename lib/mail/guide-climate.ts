@@ -1,0 +1,127 @@
+import "server-only";
+import { z } from "zod";
+import type { OrderRow, SiteRow } from "@/db/schema";
+import { BAND_IDS, nearBandEdge } from "@/lib/catalog/climate-bands";
+import { climateForZip } from "@/lib/catalog/climate-lookup";
+import { getStationIndex } from "@/lib/catalog/climate-service";
+import type { GuideClimate, GuideSite } from "./install-guide-content";
+import type { OrgFooter } from "./message-types";
+
+// Which summers the install guide is written for, in order of trust: the buyer's saved site
+// check (they told us where the house goes), else the ship-to ZIP, else, for a pickup, the
+// center's own ZIP. The saved site's JSON is written by lib/placement; only the fields the
+// guide needs are read, leniently, so a newer site format does not stop the guide.
+
+const ruleSchema = z.object({
+  name: z.string(),
+  status: z.enum(["good", "fair", "poor"]),
+  reason: z.string(),
+  change: z.string().optional(),
+});
+const siteInputSchema = z.looseObject({
+  lat: z.number().optional(),
+  julyHighF: z.number().nullish(),
+});
+// A saved site's result is the placement answer (lib/placement/placement-answer.ts): the July
+// high sits under `climate`, the hemisphere under `location`.
+const siteResultSchema = z.looseObject({
+  label: z.enum(["good", "fair", "poor"]).optional(),
+  julyHighF: z.number().nullish(),
+  climate: z.looseObject({ julyHighF: z.number().nullish() }).optional(),
+  location: z.looseObject({ hemisphere: z.enum(["north", "south"]).optional() }).optional(),
+  rules: z.array(ruleSchema).catch([]),
+});
+
+const addressSchema = z.looseObject({ zip: z.string() });
+
+export type GuideContext = {
+  climate: GuideClimate;
+  site: GuideSite | null;
+  hemisphere: "north" | "south";
+};
+
+function fromSite(site: SiteRow): GuideContext | null {
+  const bandId = BAND_IDS.find((id) => id === site.bandId);
+  if (!bandId) return null;
+  const input = siteInputSchema.safeParse(site.input);
+  const result = siteResultSchema.safeParse(site.result);
+  const julyHighF =
+    (result.success ? (result.data.climate?.julyHighF ?? result.data.julyHighF) : null) ??
+    (input.success ? input.data.julyHighF : null) ??
+    null;
+  const label = result.success ? (result.data.label ?? (site.label as GuideSite["label"])) : null;
+  const lat = input.success ? input.data.lat : undefined;
+  return {
+    climate: {
+      known: true,
+      bandId,
+      julyHighF,
+      basis: `your saved site check "${site.name}"`,
+      nearEdgeNote: julyHighF === null ? null : (nearBandEdge(julyHighF)?.note ?? null),
+    },
+    site:
+      result.success && label && ["good", "fair", "poor"].includes(label)
+        ? { name: site.name, label, rules: result.data.rules }
+        : null,
+    hemisphere: (result.success ? result.data.location?.hemisphere : undefined) ?? (lat !== undefined && lat < 0 ? "south" : "north"),
+  };
+}
+
+async function fromZip({ zip, basis }: { zip: string; basis: string }): Promise<GuideClimate> {
+  const index = await getStationIndex();
+  if (!index) {
+    return {
+      known: false,
+      reason:
+        "We could not look up your summers just now (our climate tables are not loaded), so here is the advice for every band; pick the line for your average July high.",
+    };
+  }
+  const found = climateForZip(index, zip);
+  if (!found.ok) {
+    return {
+      known: false,
+      reason: `We could not place ZIP ${zip} on our climate map, so here is the advice for every band; pick the line for your average July high (our climate page finds it from any U.S. ZIP code).`,
+    };
+  }
+  return {
+    known: true,
+    bandId: found.band.id,
+    julyHighF: found.julyHighF,
+    basis,
+    nearEdgeNote: found.nearEdge?.note ?? null,
+  };
+}
+
+export async function resolveGuideContext({
+  order,
+  site,
+  org,
+}: {
+  order: OrderRow;
+  site: SiteRow | null;
+  org: OrgFooter;
+}): Promise<GuideContext> {
+  const saved = site ? fromSite(site) : null;
+  if (saved) return saved;
+  const shipTo = addressSchema.safeParse(order.shipTo);
+  if (order.method === "parcel" && shipTo.success) {
+    const zip = shipTo.data.zip.slice(0, 5);
+    return {
+      climate: await fromZip({
+        zip,
+        basis: `the climate normals near ZIP ${zip}, where we ship your order`,
+      }),
+      site: null,
+      hemisphere: "north",
+    };
+  }
+  const zip = org.zip.slice(0, 5);
+  return {
+    climate: await fromZip({
+      zip,
+      basis: `the climate normals near ZIP ${zip}, where you pick up your order (if the house goes somewhere with hotter or cooler summers, check your band on our climate page)`,
+    }),
+    site: null,
+    hemisphere: "north",
+  };
+}

@@ -1,0 +1,204 @@
+import { CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
+import { FIT_LABEL_WORDS, fitForBand, type Fit, type FitLabel } from "@/lib/catalog/fit";
+import { SHADE_LABELS, type Shade } from "@/lib/catalog/spec";
+import { CAUTIONS, MOVE_IN_PATIENCE, type Caution } from "@/lib/safety/cautions";
+import { climateSection, describeSunWanted } from "./band-advice";
+import { UPKEEP_CALENDAR, type UpkeepSeason } from "./upkeep-calendar";
+
+export { describeSunWanted } from "./band-advice";
+
+// What the install guide says, worked out from the buyer's houses, climate band and site; the
+// e-mail template only lays it out. The mounting figures are the placement rules of PRODUCT.md
+// §4 (P1–P10, sources in lib/placement/rules.ts) and the band advice is §2 (sources in
+// lib/catalog/climate-bands.ts); metric alongside per PRODUCT.md "Units" (1 ft = 0.3048 m,
+// 1 mi = 1.609344 km).
+
+export type GuideHouse = {
+  name: string;
+  quantity: number;
+  exteriorShade: Shade;
+  vented: boolean;
+  chamberCount: number;
+  /** Mounts the model is built for: "pole", "building". */
+  mounts: readonly string[];
+  backToBackKit: boolean;
+};
+
+export type GuideClimate =
+  | {
+      known: true;
+      bandId: BandId;
+      /** Null when the band came from a saved site without its July high. */
+      julyHighF: number | null;
+      /** Where the band came from, in words: "your saved site check", "ZIP 85281", … */
+      basis: string;
+      nearEdgeNote: string | null;
+    }
+  | { known: false; reason: string };
+
+export type GuideSiteRule = {
+  name: string;
+  status: "good" | "fair" | "poor";
+  reason: string;
+  change?: string;
+};
+export type GuideSite = {
+  name: string;
+  label: "good" | "fair" | "poor";
+  rules: readonly GuideSiteRule[];
+};
+
+export type InstallGuideInput = {
+  houses: readonly GuideHouse[];
+  climate: GuideClimate;
+  site: GuideSite | null;
+  hemisphere: "north" | "south";
+};
+
+export type GuideItem = { topic: string; text: string };
+
+export type InstallGuide = {
+  climate: { heading: string; paragraphs: string[]; advice: GuideItem[] };
+  /** Where and how to mount, the same for every house of the order. */
+  mounting: GuideItem[];
+  /** Per model: how it suits the band, and what is particular to it. */
+  houses: {
+    name: string;
+    quantity: number;
+    fit: { label: FitLabel; words: string; reasons: string[] } | null;
+    notes: GuideItem[];
+  }[];
+  site: { heading: string; summary: string; toChange: GuideItem[] } | null;
+  calendar: readonly UpkeepSeason[];
+  patience: { title: string; text: string };
+  cautions: readonly Caution[];
+};
+
+const SITE_LABEL_WORDS = {
+  good: "a good spot",
+  fair: "a workable spot with changes to make",
+  poor: "a spot that needs changes first",
+} as const;
+
+function facingText(hemisphere: "north" | "south"): string {
+  return hemisphere === "north"
+    ? "Face it south to southeast (a compass bearing between 135° and 180°), so it warms in the morning sun."
+    : "Face it north to northeast (a compass bearing between 0° and 45°), so it warms in the morning sun south of the equator.";
+}
+
+function mountWords(mounts: readonly string[]): string {
+  const words = mounts.map((m) =>
+    m === "pole" ? "a pole" : m === "building" ? "a building wall" : m,
+  );
+  return words.length > 0 ? words.join(" or ") : "a pole or a building wall";
+}
+
+/** What holds for every house: P2–P10 of the placement check, with the band's sun hours. */
+function mountingPlan(input: InstallGuideInput): GuideItem[] {
+  const sun = input.climate.known
+    ? describeSunWanted({ bandId: input.climate.bandId, julyHighF: input.climate.julyHighF })
+    : "Give it at least 6 hours of direct sun a day, and 10 or more where July highs stay at or below 80 °F.";
+  return [
+    {
+      topic: "Height",
+      text: "The bottom of the house 15 to 20 ft (4.6 to 6.1 m) above the ground; 12 ft (3.7 m) is the least that works.",
+    },
+    { topic: "Facing", text: facingText(input.hemisphere) },
+    { topic: "Sun", text: sun },
+    {
+      topic: "Water",
+      text: "Within 1/4 mile (0.4 km) of a stream, pond or lake is best; within 1 mile (1.6 km) still works.",
+    },
+    {
+      topic: "Trees",
+      text: "On a pole, keep it at least 20 ft (6.1 m) from the nearest trees or woods edge, so owls and hawks have no perch beside it.",
+    },
+    {
+      topic: "Flight path",
+      text: "Leave a clear drop below the entrance: no branches, shrubs, wires or fences right under it.",
+    },
+    {
+      topic: "Lights",
+      text: "Keep it away from bright lights: a porch, yard or street light on or near the house heats it and exposes the bats.",
+    },
+    {
+      topic: "Pairs",
+      text: "Two houses back to back on one pole work well (the half facing away from the sun is fine); never mount one house above another.",
+    },
+    {
+      topic: "Predators",
+      text: "If cats, raccoons or snakes are about, fit a smooth metal guard around the pole below the house.",
+    },
+  ];
+}
+
+/** What is particular to one model: its mounts (P1), a pair kit, and paint or vents its fit calls for. */
+function houseNotes(house: GuideHouse, fit: Fit | null, input: InstallGuideInput): GuideItem[] {
+  const notes: GuideItem[] = [
+    {
+      topic: "Mount",
+      text: `On ${mountWords(house.mounts)}, never on a tree: houses on trees are seldom occupied, stay shaded and let climbing predators in.`,
+    },
+  ];
+  if (house.backToBackKit) {
+    notes.push({
+      topic: "Pair kit",
+      text: "This model is a back-to-back pair: bolt both houses to one pole with the gap and roof cap in place; bats move front to back as the sun comes round.",
+    });
+  } else if (house.quantity > 1) {
+    notes.push({
+      topic: `${house.quantity} houses`,
+      text: "Mount them back to back on one pole, or each on its own pole or wall nearby; not one above another.",
+    });
+  }
+  if (fit?.repaintTo) {
+    notes.push({
+      topic: "Paint",
+      text: `Before mounting, paint the outside ${SHADE_LABELS[fit.repaintTo].toLowerCase()} with exterior paint; keep paint out of the chambers.`,
+    });
+  }
+  if (input.climate.known && CLIMATE_BANDS[input.climate.bandId].ventsNeeded && !house.vented) {
+    notes.push({
+      topic: "No vents",
+      text: "Without vents it can overheat in your summers: give it shade from early afternoon, and check it from the ground on the hottest days.",
+    });
+  }
+  return notes;
+}
+
+function houseSection(house: GuideHouse, input: InstallGuideInput): InstallGuide["houses"][number] {
+  const fit = input.climate.known ? fitForBand(house, input.climate.bandId) : null;
+  return {
+    name: house.name,
+    quantity: house.quantity,
+    fit: fit ? { label: fit.label, words: FIT_LABEL_WORDS[fit.label], reasons: fit.reasons } : null,
+    notes: houseNotes(house, fit, input),
+  };
+}
+
+function siteSection(site: GuideSite | null): InstallGuide["site"] {
+  if (!site) return null;
+  const toChange = site.rules
+    .filter((rule) => rule.status !== "good")
+    .map((rule) => ({
+      topic: rule.name,
+      text: rule.change ? `${rule.reason} ${rule.change}` : rule.reason,
+    }));
+  const summary =
+    toChange.length === 0
+      ? `Your site check "${site.name}" found ${SITE_LABEL_WORDS[site.label]}: every rule passed. Mount the house there as planned.`
+      : `Your site check "${site.name}" found ${SITE_LABEL_WORDS[site.label]}. Before mounting, look at ${toChange.length === 1 ? "this point" : `these ${toChange.length} points`}:`;
+  return { heading: "Your saved site", summary, toChange };
+}
+
+export function buildInstallGuide(input: InstallGuideInput): InstallGuide {
+  return {
+    climate: climateSection(input.climate),
+    mounting: mountingPlan(input),
+    houses: input.houses.map((house) => houseSection(house, input)),
+    site: siteSection(input.site),
+    calendar: UPKEEP_CALENDAR,
+    patience: MOVE_IN_PATIENCE,
+    cautions: CAUTIONS,
+  };
+}
