@@ -57,7 +57,7 @@ await prepareDatabase();
 const standIns = await startStandIns();
 
 const nextBin = path.join("node_modules", ".bin", "next");
-const childEnv = { ...process.env, NEXT_TELEMETRY_DISABLED: "1", NEXT_MANUAL_SIG_HANDLE: "1", PORT: port };
+const childEnv = { ...process.env, NEXT_TELEMETRY_DISABLED: "1", NEXT_MANUAL_SIG_HANDLE: "1", PORT: port, NEXTAUTH_URL: process.env.NEXTAUTH_URL ?? settings.APP_URL };
 if (!dev && !args.has("--no-build") && !existsSync(path.join(".next", "BUILD_ID"))) {
   console.log("• Building the store (first start only)…");
   const build = spawnSync(nextBin, ["build"], { stdio: "inherit", env: { ...childEnv, NODE_ENV: "production" } });
