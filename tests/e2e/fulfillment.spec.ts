@@ -104,7 +104,8 @@ test("a volunteer filters the queue, packs a two-house order into two boxes and 
   await page.getByLabel("Order number or name").fill(order.number);
   await expect(rows).toHaveCount(2); // header + the one order
   await expect(page).toHaveURL(new RegExp(`method=parcel.*q=${order.number}`));
-  await page.getByRole("link", { name: order.number, exact: true }).click();
+  // The oldest waiting order is also linked from the notice above the table: open it from the table.
+  await page.getByRole("region", { name: "Orders in this view" }).getByRole("link", { name: order.number, exact: true }).click();
 
   await expect(page.getByRole("heading", { level: 1, name: `Order ${order.number}` })).toBeVisible();
   await expect(page.getByRole("region", { name: "Houses and their cartons" })).toContainText(`${a.billableLb} lb`);
@@ -162,7 +163,8 @@ test("a pickup order is marked ready and then collected", async ({ page, request
   const order = await paidOrder(request, { items: [{ slug: house!.slug, quantity: 1 }], method: "pickup", contact: contact("Dmitri Osgood") });
   await signInAs(page, "fulfillment");
   await page.goto(`/fulfillment?method=pickup&q=${order.number}`);
-  await page.getByRole("link", { name: order.number, exact: true }).click();
+  // The oldest waiting order is also linked from the notice above the table: open it from the table.
+  await page.getByRole("region", { name: "Orders in this view" }).getByRole("link", { name: order.number, exact: true }).click();
   await expect(page.getByRole("heading", { level: 1, name: `Order ${order.number}` })).toBeVisible();
   await page.waitForLoadState("networkidle");
   await pressUntil(page.getByRole("button", { name: "Start packing" }), page.getByRole("button", { name: "Ready at the front desk" }));
