@@ -2,7 +2,7 @@ import localFont from "next/font/local";
 
 // Both faces ship with the app (copied from @fontsource/fraunces and
 // @fontsource/atkinson-hyperlegible 5.3, latin subset, SIL OFL 1.1: see app/fonts/LICENSE-*).
-// next/font/google would download at build time, which this project cannot rely on.
+// The Google-hosted font loader would download at build time, which this project cannot rely on.
 
 /** Headings and display type: Fraunces, a soft old-style serif that suits a field guide. */
 export const displayFont = localFont({

@@ -10,7 +10,7 @@ import { getOrderForViewer } from "@/lib/checkout/order-access";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { getOrderLines } from "@/lib/checkout/order-queries";
 import { getPayments } from "@/lib/checkout/payments";
-import { formatUsd } from "@/lib/checkout/money";
+import { OrderLineList } from "@/components/orders/order-line-list";
 import { env } from "@/lib/config/env";
 import { AppError } from "@/lib/http/errors";
 
@@ -78,18 +78,7 @@ export default async function CheckoutPage({ params, searchParams }: Props) {
           <h2 id="order-summary" className="font-display text-2xl font-semibold text-moss-900">
             Your order
           </h2>
-          {lines.length > 0 ? (
-            <ul className="flex flex-col gap-1">
-              {lines.map((l) => (
-                <li key={l.id} className="flex justify-between gap-3">
-                  <span>
-                    {l.quantity} × {l.name}
-                  </span>
-                  <span>{formatUsd(l.unitPriceCents * l.quantity)}</span>
-                </li>
-              ))}
-            </ul>
-          ) : null}
+          <OrderLineList lines={lines} />
           <OrderSummary method={order.method} amounts={order} />
           {order.giftCents > 0 ? (
             <Alert tone="info" title="About your gift">

@@ -8,6 +8,7 @@ import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { getOrderLines } from "@/lib/checkout/order-queries";
 import { getOrderReceipt } from "@/lib/checkout/receipt-service";
 import { formatUsd } from "@/lib/checkout/money";
+import { OrderLineList } from "@/components/orders/order-line-list";
 import { AppError } from "@/lib/http/errors";
 
 export const metadata: Metadata = { title: "Receipt" };
@@ -62,18 +63,7 @@ export default async function ReceiptPage({ params, searchParams }: Props) {
             {formatOrderNumber(order.number)} · {order.name} · {receipt.date ? day.format(new Date(receipt.date)) : ""}
           </p>
         </header>
-        {lines.length > 0 ? (
-          <ul className="mt-4 flex flex-col gap-1">
-            {lines.map((l) => (
-              <li key={l.id} className="flex justify-between">
-                <span>
-                  {l.quantity} × {l.name}
-                </span>
-                <span>{formatUsd(l.unitPriceCents * l.quantity)}</span>
-              </li>
-            ))}
-          </ul>
-        ) : null}
+        <OrderLineList lines={lines} className="mt-4" />
         <dl className="mt-4 grid grid-cols-[1fr_auto] gap-x-6 gap-y-1">
           <dt>Amount paid</dt>
           <dd className="text-right font-bold">{formatUsd(receipt.amountPaidCents)}</dd>
