@@ -56,7 +56,12 @@ async function bumpVersion(tx: Tx, order: ShippableOrder, status: FulfillmentSta
     .set({ status, version: order.version + 1 })
     .where(and(eq(orders.id, order.id), eq(orders.version, order.version)))
     .returning();
-  if (!updated) throw staleVersionError(labelOf(order.status));
+  if (!updated) {
+    // Another writer won the row between our read and this update (on a PostgreSQL server the
+    // update waited for it): say what the order is now, not what it was when we read it.
+    const [current] = await tx.select({ status: orders.status }).from(orders).where(eq(orders.id, order.id));
+    throw staleVersionError(labelOf(current?.status ?? order.status));
+  }
   return updated;
 }
 
