@@ -23,11 +23,12 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
   return (
     <html lang="en" className={`${displayFont.variable} ${bodyFont.variable}`}>
       <head>
-        {settings.useStandIns ? (
-          // The local payments stand-in's browser script: it defines window.Stripe before the app's
-          // bundle loads, so the SDK's Elements run unchanged against the local service.
+        {settings.useStandIns && settings.STRIPE_API_BASE ? (
+          // The local payments stand-in serves its browser script as the hosted service serves its
+          // own: it defines window.Stripe before the app's bundle loads, so the SDK's Elements run
+          // unchanged against the local service (stand-ins/payments/browser-script.ts).
           // eslint-disable-next-line @next/next/no-sync-scripts -- must exist before the SDK looks for it
-          <script src="/stand-ins/stripe.js" data-api-base={settings.STRIPE_API_BASE} />
+          <script src={`${settings.STRIPE_API_BASE.replace(/\/+$/, "")}/stripe.js`} />
         ) : null}
       </head>
       <body className="flex min-h-dvh flex-col">

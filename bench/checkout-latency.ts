@@ -20,7 +20,7 @@ const { startCheckout } = await import("@/lib/checkout/orders");
 const { getPayments } = await import("@/lib/checkout/payments");
 const { verifyWebhook } = await import("@/lib/checkout/payments");
 const { processPaymentEvent } = await import("@/lib/checkout/webhooks");
-const { startPaymentsStandIn } = await import("@/lib/stand-ins/payments/server");
+const { startPaymentsStandIn } = await import("@/stand-ins/payments/server");
 
 const N = Number(process.argv[2] ?? 200);
 const db = await getDb();

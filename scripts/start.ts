@@ -10,9 +10,9 @@ import { closeDb, getDb } from "@/db/client";
 import { isEmpty, seedDemo } from "@/db/seed";
 import { importClimateIfEmpty } from "@/lib/catalog/climate-store";
 import { env } from "@/lib/config/env";
-import { startMailStandIn } from "@/lib/stand-ins/mail/server";
-import { startPaymentsStandIn } from "@/lib/stand-ins/payments/server";
-import { startUploadsStandIn } from "@/lib/stand-ins/uploads/server";
+import { startMailStandIn } from "@/stand-ins/mail/server";
+import { startPaymentsStandIn } from "@/stand-ins/payments/server";
+import { startUploadsStandIn } from "@/stand-ins/uploads/server";
 
 const args = new Set(process.argv.slice(2));
 const dev = args.has("--dev");

@@ -1,7 +1,7 @@
 import { createHmac } from "node:crypto";
 import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
-import { startPaymentsStandIn, type PaymentsStandIn } from "@/lib/stand-ins/payments/server";
+import { startPaymentsStandIn, type PaymentsStandIn } from "@/stand-ins/payments/server";
 import { POST as webhookPost } from "@/app/api/webhooks/stripe/route";
 
 /** Signs a body exactly as the payment service does: HMAC-SHA256 of "t.body" keyed by the whole secret. */

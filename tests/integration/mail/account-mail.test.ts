@@ -10,7 +10,7 @@ import { requestPasswordReset } from "@/lib/mail/password-reset";
 import { getEmailPreferences } from "@/lib/mail/preferences";
 import { queueSeasonalReminders } from "@/lib/mail/seasonal-job";
 import { deliverPendingMail } from "@/lib/mail/sender";
-import type { MailStandIn } from "@/lib/stand-ins/mail/server";
+import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";
 import { startTestPayments } from "../../support/payments";
 import { checkoutInput, pay, startCheckout } from "../checkout/helpers";

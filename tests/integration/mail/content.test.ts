@@ -9,7 +9,7 @@ import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { renderOutboxMessage } from "@/lib/mail/render-message";
 import { deliverPendingMail } from "@/lib/mail/sender";
 import { CAUTIONS } from "@/lib/safety/cautions";
-import type { MailStandIn } from "@/lib/stand-ins/mail/server";
+import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";
 import { startTestPayments } from "../../support/payments";
 import { orderRow } from "../checkout/helpers";

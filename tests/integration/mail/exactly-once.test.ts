@@ -6,7 +6,7 @@ import { seedDemo } from "@/db/seed";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { MAX_ATTEMPTS } from "@/lib/mail/backoff";
 import { deliverPendingMail } from "@/lib/mail/sender";
-import type { MailStandIn } from "@/lib/stand-ins/mail/server";
+import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";
 import { startTestPayments } from "../../support/payments";
 import { orderRow } from "../checkout/helpers";

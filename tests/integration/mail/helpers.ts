@@ -1,8 +1,8 @@
 import { inArray } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { climateStations } from "@/db/schema";
-import { startMailStandIn, type MailStandIn } from "@/lib/stand-ins/mail/server";
-import type { StoredMessage } from "@/lib/stand-ins/mail/message-store";
+import { startMailStandIn, type MailStandIn } from "@/stand-ins/mail/server";
+import type { StoredMessage } from "@/stand-ins/mail/message-store";
 import type { CheckoutRequest } from "@/lib/checkout/schemas";
 import { checkoutInput, pay, startCheckout } from "../checkout/helpers";
 import type { startTestPayments } from "../../support/payments";

@@ -13,7 +13,7 @@ import {
   RESET_REQUESTS_PER_HOUR,
 } from "@/lib/mail/password-reset";
 import { deliverPendingMail } from "@/lib/mail/sender";
-import type { MailStandIn } from "@/lib/stand-ins/mail/server";
+import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";
 import { clearInbox, startTestMail } from "./helpers";
 

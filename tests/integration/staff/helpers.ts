@@ -9,7 +9,7 @@ import type { Db } from "@/db/client";
 import { houseModels, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session";
-import { startUploadsStandIn } from "@/lib/stand-ins/uploads/server";
+import { startUploadsStandIn } from "@/stand-ins/uploads/server";
 import { configureObjectStore } from "@/lib/uploads/object-store";
 
 export const BUCKET = "roostwright-photos-test";

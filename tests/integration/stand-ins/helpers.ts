@@ -1,6 +1,6 @@
 import { createServer, type IncomingMessage } from "node:http";
 import Stripe from "stripe";
-import { closeServer, listenOnLoopback, readBody } from "@/lib/stand-ins/shared/http";
+import { closeServer, listenOnLoopback, readBody } from "@/stand-ins/shared/http";
 
 export const TEST_SECRET_KEY = "sk_test_roostwright_stand_in_tests";
 export const TEST_PUBLISHABLE_KEY = "pk_test_roostwright_stand_in_tests";

@@ -3,8 +3,8 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { Resend } from "resend";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
-import { parseMailbox } from "@/lib/stand-ins/mail/email-schema";
-import { startMailStandIn, type MailStandIn } from "@/lib/stand-ins/mail/server";
+import { parseMailbox } from "@/stand-ins/mail/email-schema";
+import { startMailStandIn, type MailStandIn } from "@/stand-ins/mail/server";
 
 // The real `resend` SDK (v6) reads RESEND_BASE_URL when a client is constructed.
 let standIn: MailStandIn;

@@ -1,6 +1,6 @@
 import Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { startPaymentsStandIn, type PaymentsStandIn } from "@/lib/stand-ins/payments/server";
+import { startPaymentsStandIn, type PaymentsStandIn } from "@/stand-ins/payments/server";
 import {
   TEST_PUBLISHABLE_KEY,
   TEST_SECRET_KEY,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { decodeForm, splitBracketKey } from "@/lib/stand-ins/shared/form-decode";
+import { decodeForm, splitBracketKey } from "@/stand-ins/shared/form-decode";
 import {
   TEST_CARDS,
   TEST_PAYMENT_METHOD_TOKENS,
@@ -7,7 +7,7 @@ import {
   findCardDetailsProblem,
   isLuhnValid,
   resolveCardOutcome,
-} from "@/lib/stand-ins/payments/test-cards";
+} from "@/stand-ins/payments/test-cards";
 
 describe("Luhn check (Luhn 1960; ISO/IEC 7812-1)", () => {
   it("accepts the widely published worked example 7992739871-3 and rejects its neighbours", () => {

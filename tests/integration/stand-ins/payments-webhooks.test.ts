@@ -1,7 +1,7 @@
 import Stripe from "stripe";
 import { afterEach, describe, expect, it } from "vitest";
-import { startPaymentsStandIn, type PaymentsStandIn } from "@/lib/stand-ins/payments/server";
-import { signWebhookPayload } from "@/lib/stand-ins/payments/webhook-signature";
+import { startPaymentsStandIn, type PaymentsStandIn } from "@/stand-ins/payments/server";
+import { signWebhookPayload } from "@/stand-ins/payments/webhook-signature";
 import { TEST_WEBHOOK_SECRET, createStripeClient, startWebhookReceiver, waitFor } from "./helpers";
 
 type Receiver = Awaited<ReturnType<typeof startWebhookReceiver>>;

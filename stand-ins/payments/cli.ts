@@ -2,7 +2,7 @@ import { z } from "zod";
 import { startPaymentsStandIn } from "./server";
 
 /**
- * `tsx lib/stand-ins/payments/cli.ts` — starts the payments stand-in from environment variables.
+ * `tsx stand-ins/payments/cli.ts` — starts the payments stand-in from environment variables.
  * The webhook secret must be the one the app verifies with; the local default is only for a
  * first run on a developer's machine.
  */

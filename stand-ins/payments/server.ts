@@ -11,6 +11,7 @@ import {
 import { createPrefixedId } from "../shared/ids";
 import { matchApiRoute } from "./api-routes";
 import { authenticate, type ExpectedKeys } from "./auth";
+import { BROWSER_SCRIPT_PATH, sendBrowserScript } from "./browser-script";
 import { handleControlRequest, type ControlContext } from "./control-routes";
 import {
   createPaymentsEngine,
@@ -24,9 +25,9 @@ import type { StripeEvent } from "./objects";
 import { createWebhookDispatcher, type DeliveryAttempt } from "./webhook-dispatcher";
 
 /**
- * Local stand-in for the payments API: the `stripe` SDK (server) and `public/stand-ins/stripe.js`
- * (browser) talk to it instead of the hosted service. Routes: see api-routes.ts; test controls:
- * see control-routes.ts.
+ * Local stand-in for the payments API: the `stripe` SDK (server) and `browser/stripe.js` (the
+ * browser library, served here at `/stripe.js`) talk to it instead of the hosted service. Routes:
+ * see api-routes.ts; test controls: see control-routes.ts.
  */
 
 // The version the `stripe` SDK 23.1 pins; events carry the caller's Stripe-Version when it sends one.
@@ -139,6 +140,10 @@ export async function startPaymentsStandIn(
     const headers: Record<string, string> = { ...CORS_HEADERS, "Request-Id": requestId };
     if (method === "OPTIONS") {
       res.writeHead(204, headers).end();
+      return;
+    }
+    if ((method === "GET" || method === "HEAD") && url.pathname === BROWSER_SCRIPT_PATH) {
+      await sendBrowserScript(res, headers);
       return;
     }
     const body = await readBody(req);

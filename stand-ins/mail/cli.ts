@@ -2,7 +2,7 @@ import path from "node:path";
 import { z } from "zod";
 import { startMailStandIn } from "./server";
 
-/** `tsx lib/stand-ins/mail/cli.ts` — starts the mail stand-in from environment variables. */
+/** `tsx stand-ins/mail/cli.ts` — starts the mail stand-in from environment variables. */
 
 const envSchema = z.object({
   MAIL_PORT: z.coerce.number().int().min(1).max(65_535).default(12_112),

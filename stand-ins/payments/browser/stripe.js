@@ -2,10 +2,11 @@
  * Local stand-in for the payment provider's browser library (plain JS, no build step).
  *
  * Load it with a classic <script> BEFORE the app's bundle, only when the local fakes are on:
- *   <script src="/stand-ins/stripe.js" data-api-base="http://127.0.0.1:12111"></script>
+ *   <script src="http://127.0.0.1:12111/stripe.js"></script>
+ * It talks to the API of the server it was loaded from (or to `data-api-base` when given).
  * `loadStripe()` from @stripe/stripe-js 10 uses an existing `window.Stripe` instead of injecting
  * the hosted script, so <Elements>/<PaymentElement> from @stripe/react-stripe-js 7 run unchanged
- * against the payments stand-in (lib/stand-ins/payments).
+ * against the payments stand-in (stand-ins/payments), which serves this file at /stripe.js.
  *
  * What it provides: Stripe(pk) with elements(), confirmPayment(), confirmCardPayment(),
  * retrievePaymentIntent(), handleNextAction(), registerAppInfo(), _registerWrapper();
@@ -23,9 +24,10 @@
   "use strict";
 
   var currentScript =
-    document.currentScript || document.querySelector('script[src*="stand-ins/stripe.js"]');
+    document.currentScript || document.querySelector('script[src$="/stripe.js"]');
   var API_BASE = (
     (currentScript && currentScript.dataset.apiBase) ||
+    (currentScript && currentScript.src ? new URL(currentScript.src).origin : "") ||
     "http://127.0.0.1:12111"
   ).replace(/\/+$/, "");
   // @stripe/stripe-js compares this with its release train and warns on a mismatch for test keys.
@@ -159,7 +161,7 @@
     return String(clientSecret || "").split("_secret_")[0];
   }
 
-  /* ---------- card rules (same as lib/stand-ins/payments/test-cards.ts) ---------- */
+  /* ---------- card rules (same as stand-ins/payments/test-cards.ts) ---------- */
 
   // Luhn (mod 10): H. P. Luhn, U.S. Patent 2,950,048 (1960).
   function isLuhnValid(digits) {
