@@ -7,7 +7,7 @@ process.env.DATABASE_URL = "memory://";
 export {};
 
 const { getDb, closeDb } = await import("@/db/client");
-const { seedDemo } = await import("@/db/seed");
+const { seedDemo } = await import("@/lib/demo/commands");
 const { houseModels, orderLines, orders, parcels } = await import("@/db/schema");
 const { listQueueOrders, summarizeQueue } = await import("@/lib/fulfillment/queue");
 const { queueParamsSchema } = await import("@/lib/fulfillment/queue-params");

@@ -1,8 +1,8 @@
 import { mkdirSync } from "node:fs";
 import path from "node:path";
 import type { PgDatabase, PgQueryResultHKT } from "drizzle-orm/pg-core";
-import { env } from "@/lib/config/env";
 import { acquireDataDirLock } from "./lock";
+import { databaseSettings } from "./settings";
 import * as schema from "./schema";
 
 export type Db = PgDatabase<PgQueryResultHKT, typeof schema>;
@@ -63,7 +63,7 @@ function open(): Promise<Handle> {
   if (process.env.NEXT_PHASE === "phase-production-build") {
     throw new Error("The database must not be opened during `next build`: make the page dynamic (await connection()).");
   }
-  const settings = env();
+  const settings = databaseSettings();
   const url = settings.DATABASE_URL;
   if (url?.startsWith("memory://")) return openPglite(null);
   if (url) return openPostgres(url);

@@ -5,7 +5,7 @@
  */
 import { mkdirSync } from "node:fs";
 import { chromium } from "@playwright/test";
-import { DEMO_USERS } from "@/db/seed-data";
+import { DEMO_USERS } from "@/lib/demo/seed-data";
 
 const args = process.argv.slice(2);
 const option = (name: string) => {

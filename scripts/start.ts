@@ -6,9 +6,6 @@
 import { spawn, spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import path from "node:path";
-import { closeDb, getDb } from "@/db/client";
-import { isEmpty, seedDemo } from "@/db/seed";
-import { importClimateIfEmpty } from "@/lib/catalog/climate-store";
 import { env } from "@/lib/config/env";
 import { startMailStandIn } from "@/stand-ins/mail/server";
 import { startPaymentsStandIn } from "@/stand-ins/payments/server";
@@ -19,16 +16,13 @@ const dev = args.has("--dev");
 const settings = env();
 const port = new URL(settings.APP_URL).port || "3000";
 
-async function prepareDatabase() {
-  const db = await getDb();
-  if (await isEmpty(db)) {
-    console.log("• Loading the demo scenario…");
-    await seedDemo(db);
-  }
-  const imported = await importClimateIfEmpty(db, settings.NOAA_DIR);
-  if (imported) console.log(`• Imported ${imported.stations} climate stations (${imported.skipped} lines skipped).`);
-  // Release the embedded database: the Next.js server opens it next.
-  await closeDb();
+// Migrate, seed and import in a child process: the data modules are server-only, so they load only
+// under the react-server condition, and the child's exit releases the embedded database before
+// the Next.js server opens it.
+function prepareDatabase() {
+  const tsx = path.join("node_modules", ".bin", "tsx");
+  const prepared = spawnSync(tsx, ["--conditions=react-server", path.join("scripts", "prepare-data.ts")], { stdio: "inherit" });
+  if (prepared.status !== 0) process.exit(prepared.status ?? 1);
 }
 
 async function startStandIns() {
@@ -53,7 +47,7 @@ async function startStandIns() {
   return [payments, mail, uploads];
 }
 
-await prepareDatabase();
+prepareDatabase();
 const standIns = await startStandIns();
 
 const nextBin = path.join("node_modules", ".bin", "next");

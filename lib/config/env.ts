@@ -2,6 +2,7 @@ import { randomBytes } from "node:crypto";
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { z } from "zod";
+import { databaseSettingsShape } from "@/db/settings";
 
 /**
  * Every setting the store reads, validated once. Local mode (the default) fills in safe
@@ -12,11 +13,7 @@ import { z } from "zod";
 const envSchema = z.object({
   ROOSTWRIGHT_MODE: z.enum(["local", "production"]).default("local"),
   APP_URL: z.string().url().default("http://localhost:3000"),
-  DATA_DIR: z.string().min(1).default("var/data"),
-  DATABASE_URL: z
-    .string()
-    .regex(/^(postgres(ql)?:\/\/|memory:\/\/)/, "DATABASE_URL must be a postgres:// URL (or memory:// for tests)")
-    .optional(),
+  ...databaseSettingsShape,
   NEXTAUTH_SECRET: z.string().min(32, "NEXTAUTH_SECRET must be at least 32 characters").optional(),
   STRIPE_SECRET_KEY: z.string().startsWith("sk_", "STRIPE_SECRET_KEY must start with sk_").optional(),
   STRIPE_PUBLISHABLE_KEY: z.string().startsWith("pk_", "STRIPE_PUBLISHABLE_KEY must start with pk_").optional(),

@@ -1,5 +1,5 @@
 import { expect, type Page } from "@playwright/test";
-import { DEMO_USERS } from "../../../db/seed-data";
+import { DEMO_USERS } from "../../../lib/demo/seed-data";
 
 export type DemoRole = (typeof DEMO_USERS)[number]["role"];
 

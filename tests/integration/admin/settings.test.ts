@@ -1,6 +1,6 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import { seedDemo } from "@/db/seed";
-import { DEMO_ORGANIZATION } from "@/db/seed-data";
+import { seedDemo } from "@/lib/demo/commands";
+import { DEMO_ORGANIZATION } from "@/lib/demo/seed-data";
 import { getOrganization, listShippingRates } from "@/lib/admin/settings";
 import { quoteFromDatabase } from "@/lib/checkout/quote-service";
 import type { SessionUser } from "@/lib/auth/session";

@@ -1,8 +1,8 @@
 import { count, eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it } from "vitest";
 import { signInAttempts, users } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
-import { DEMO_USERS } from "@/db/seed-data";
+import { seedDemo } from "@/lib/demo/commands";
+import { DEMO_USERS } from "@/lib/demo/seed-data";
 import { authenticate, SignInRefused } from "@/lib/auth/credentials";
 import { MAX_FAILURES_PER_ACCOUNT } from "@/lib/auth/throttle";
 import { resetDb } from "../../support/db";

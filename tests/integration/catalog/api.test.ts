@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { getDb } from "@/db/client";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import { importClimate } from "@/lib/catalog/climate-store";
 import { resetDb } from "../../support/db";
 

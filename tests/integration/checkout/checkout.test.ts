@@ -2,7 +2,7 @@ import { and, count, eq } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { getDb } from "@/db/client";
 import { orders, refunds, stockMovements } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import { POST as quotePost } from "@/app/api/cart/quote/route";
 import { POST as checkoutPost } from "@/app/api/checkout/route";
 import { expireStaleReservations, RESERVATION_MS } from "@/lib/checkout/orders";

@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db/client";
 import { orders } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import { resetDb } from "../../support/db";
 import { startTestPayments } from "../../support/payments";
 import { checkoutInput, pay, setStock, startCheckout, stockOf } from "./helpers";

@@ -1,7 +1,7 @@
 import { and, count, eq } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { gifts, outbox, stockMovements, webhookEvents } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import { getPayments } from "@/lib/checkout/payments";
 import { resetDb } from "../../support/db";
 import { deliver, signPayload, startTestPayments } from "../../support/payments";

@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it, vi } from "vitest";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import type { SessionUser } from "@/lib/auth/session";
 import { GET as csvGet } from "@/app/api/fulfillment/orders.csv/route";
 import { GET as queueGet } from "@/app/api/fulfillment/orders/route";

@@ -2,7 +2,7 @@ import { count, eq } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { getDb } from "@/db/client";
 import { houseModels, refunds } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import type { SessionUser } from "@/lib/auth/session";
 import { POST as cancelPost } from "@/app/api/fulfillment/orders/[id]/cancel/route";
 import { POST as refundPost } from "@/app/api/fulfillment/orders/[id]/refund/route";

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import type { SessionUser } from "@/lib/auth/session";
 import type { Role } from "@/lib/auth/roles";
 import { GET as csvGet } from "@/app/api/fulfillment/orders.csv/route";

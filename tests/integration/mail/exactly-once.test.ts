@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { getDb } from "@/db/client";
 import { outbox } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { MAX_ATTEMPTS } from "@/lib/mail/backoff";
 import { deliverPendingMail } from "@/lib/mail/sender";

@@ -2,8 +2,8 @@ import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { getDb } from "@/db/client";
 import { outbox, passwordResetTokens, users } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
-import { DEMO_USERS } from "@/db/seed-data";
+import { seedDemo } from "@/lib/demo/commands";
+import { DEMO_USERS } from "@/lib/demo/seed-data";
 import { verifyPassword } from "@/lib/auth/passwords";
 import { AppError } from "@/lib/http/errors";
 import {

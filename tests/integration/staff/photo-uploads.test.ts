@@ -9,7 +9,7 @@ import { GET as getPhotos, POST as uploadPhoto } from "@/app/api/staff/models/[s
 import { GET as getMedia } from "@/app/media/[...key]/route";
 import { removePhotoAction, reorderPhotosAction } from "@/app/staff/models/[slug]/photos/actions";
 import { modelPhotos } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import { getSessionUser } from "@/lib/auth/session";
 import { MAX_UPLOAD_BYTES } from "@/lib/uploads/upload-rules";
 import { resetDb } from "../../support/db";

@@ -14,7 +14,7 @@ import {
 import { recordInspectionAction } from "@/app/staff/models/[slug]/inspections/actions";
 import { getDb } from "@/db/client";
 import { houseModels, inspections, orderLines, orders } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import { getSessionUser } from "@/lib/auth/session";
 import { listHouses } from "@/lib/catalog/queries";
 import type { ModelInput } from "@/lib/staff/model-input";

@@ -13,7 +13,7 @@ import * as inspectionActions from "@/app/staff/models/[slug]/inspections/action
 import * as stockActions from "@/app/staff/models/[slug]/stock/actions";
 import { getDb } from "@/db/client";
 import { houseModels, inspections, modelPhotos, stockMovements } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import { getSessionUser } from "@/lib/auth/session";
 import type { SessionUser } from "@/lib/auth/session";
 import { resetDb } from "../../support/db";

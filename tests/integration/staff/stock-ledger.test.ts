@@ -8,7 +8,7 @@ import { adjustStockAction, receiveStockAction } from "@/app/staff/models/[slug]
 import { GET as getLedger } from "@/app/api/staff/models/[slug]/stock-movements/route";
 import { getDb } from "@/db/client";
 import { houseModels, stockMovements } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/lib/demo/commands";
 import { getSessionUser } from "@/lib/auth/session";
 import { resetDb } from "../../support/db";
 import { modelBySlug, params, sessionUserFor } from "./helpers";

@@ -1,5 +1,5 @@
-import { closeDb, getDb } from "./client";
-import { seedDemo } from "./seed";
+import { closeDb, getDb } from "@/db/client";
+import { seedDemo } from "@/lib/demo/commands";
 
 // `npm run db:seed`: safe to run again; existing rows are left alone.
 const db = await getDb();

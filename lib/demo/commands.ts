@@ -1,7 +1,6 @@
-import { count, eq } from "drizzle-orm";
-import { hashPassword } from "@/lib/auth/passwords";
-import type { Db } from "./client";
-import { DEMO_MODELS, DEMO_ORGANIZATION, DEMO_SHIPPING_RATES, DEMO_TAX_RATES, DEMO_USERS } from "./seed-data";
+import "server-only";
+import { eq } from "drizzle-orm";
+import type { Db } from "@/db/client";
 import {
   houseModels,
   inspections,
@@ -10,14 +9,11 @@ import {
   stockMovements,
   taxRates,
   users,
-} from "./schema";
+} from "@/db/schema";
+import { hashPassword } from "@/lib/auth/passwords";
+import { DEMO_MODELS, DEMO_ORGANIZATION, DEMO_SHIPPING_RATES, DEMO_TAX_RATES, DEMO_USERS } from "./seed-data";
 
 const DAY_MS = 24 * 60 * 60 * 1000;
-
-export async function isEmpty(db: Db): Promise<boolean> {
-  const [row] = await db.select({ n: count() }).from(users);
-  return (row?.n ?? 0) === 0;
-}
 
 /** Loads the demo scenario. Idempotent: rows that exist (by e-mail, slug, tier, state) are left alone. */
 export async function seedDemo(db: Db, now = new Date()): Promise<void> {
