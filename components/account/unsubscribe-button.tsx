@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { unsubscribeAction } from "@/app/unsubscribe/actions";
+import { unsubscribeAction } from "@/lib/mail/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { emailYearEndStatementAction } from "@/app/(account)/account/gifts/actions";
+import { emailYearEndStatementAction } from "@/lib/mail/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 

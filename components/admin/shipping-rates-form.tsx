@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { saveShippingRatesAction } from "@/app/admin/settings/actions";
+import { saveShippingRatesAction } from "@/lib/admin/actions";
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/input";
 import { useToast } from "@/components/ui/toast";

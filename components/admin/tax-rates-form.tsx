@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { saveTaxRatesAction } from "@/app/admin/settings/actions";
+import { saveTaxRatesAction } from "@/lib/admin/actions";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/form-error";
 import { Input } from "@/components/ui/input";

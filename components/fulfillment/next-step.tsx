@@ -7,10 +7,9 @@ import type { BoxDraft } from "@/lib/fulfillment/packing";
 import type { FulfillmentState } from "@/lib/fulfillment/state-labels";
 import { ConflictNotice } from "./conflict-notice";
 import { PackForm } from "./pack-form";
+import type { NextStepBox } from "./ship-box";
 import { ShipBoxForm } from "./ship-box-form";
 import { useOrderAction } from "./use-order-action";
-
-export type NextStepBox = { id: string; description: string; tracked: boolean };
 
 type Props = {
   orderId: string;

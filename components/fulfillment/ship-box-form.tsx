@@ -8,7 +8,7 @@ import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
 import { shipBoxSchema, type ShipBoxInput } from "@/lib/fulfillment/schemas";
 import { CARRIER_LABELS, CARRIERS, type Carrier } from "@/lib/fulfillment/tracking";
-import type { NextStepBox } from "./next-step";
+import type { NextStepBox } from "./ship-box";
 import type { useOrderAction } from "./use-order-action";
 
 // Services the center uses most, offered as suggestions; any other name can be typed.

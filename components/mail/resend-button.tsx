@@ -1,7 +1,7 @@
 "use client";
 
 import { useTransition } from "react";
-import { resendMailAction } from "@/app/admin/mail/actions";
+import { resendMailAction } from "@/lib/mail/actions";
 import { Button } from "@/components/ui/button";
 import { useToast } from "@/components/ui/toast";
 

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Path } from "react-hook-form";
-import { recordInspectionAction } from "@/app/staff/models/[slug]/inspections/actions";
+import { recordInspectionAction } from "@/lib/staff/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Checkbox } from "@/components/ui/checkbox";

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useMemo, useState, type ReactNode } from "react";
 import { useForm, useWatch, type DefaultValues, type Path } from "react-hook-form";
-import { createModelAction, updateModelAction } from "@/app/staff/models/actions";
+import { createModelAction, updateModelAction } from "@/lib/staff/actions";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/form-error";
 import { useToast } from "@/components/ui/toast";

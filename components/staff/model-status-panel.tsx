@@ -7,7 +7,7 @@ import {
   publishModelAction,
   retireModelAction,
   returnModelToDraftsAction,
-} from "@/app/staff/models/actions";
+} from "@/lib/staff/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/dialog";

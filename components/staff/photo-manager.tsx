@@ -7,7 +7,7 @@ import {
   removePhotoAction,
   reorderPhotosAction,
   updatePhotoAltAction,
-} from "@/app/staff/models/[slug]/photos/actions";
+} from "@/lib/staff/actions";
 import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/dialog";
 import { EmptyState } from "@/components/ui/empty-state";

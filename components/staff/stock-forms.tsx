@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Path } from "react-hook-form";
-import { adjustStockAction, receiveStockAction } from "@/app/staff/models/[slug]/stock/actions";
+import { adjustStockAction, receiveStockAction } from "@/lib/staff/actions";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormError } from "@/components/ui/form-error";

@@ -1,6 +1,6 @@
 import { CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
 import { getSunRegime, MORNING_SHARE_MIN } from "@/lib/placement/sun-rule";
-import type { GuideClimate, GuideItem } from "./install-guide-content";
+import type { GuideClimate, GuideItem } from "./install-guide-types";
 
 // What a climate band means for the house: shade, vents, sun hours and afternoon shade.
 // Sources: PRODUCT.md §2 (shades and vents: the colour guidance keyed to the average July high,

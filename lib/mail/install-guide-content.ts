@@ -1,9 +1,10 @@
-import { CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
-import { FIT_LABEL_WORDS, fitForBand, type Fit, type FitLabel } from "@/lib/catalog/fit";
-import { SHADE_LABELS, type Shade } from "@/lib/catalog/spec";
-import { CAUTIONS, MOVE_IN_PATIENCE, type Caution } from "@/lib/safety/cautions";
+import { CLIMATE_BANDS } from "@/lib/catalog/climate-bands";
+import { FIT_LABEL_WORDS, fitForBand, type Fit } from "@/lib/catalog/fit";
+import { SHADE_LABELS } from "@/lib/catalog/spec";
+import { CAUTIONS, MOVE_IN_PATIENCE } from "@/lib/safety/cautions";
 import { climateSection, describeSunWanted } from "./band-advice";
-import { UPKEEP_CALENDAR, type UpkeepSeason } from "./upkeep-calendar";
+import type { GuideHouse, GuideItem, GuideSite, InstallGuide, InstallGuideInput } from "./install-guide-types";
+import { UPKEEP_CALENDAR } from "./upkeep-calendar";
 
 export { describeSunWanted } from "./band-advice";
 
@@ -13,67 +14,15 @@ export { describeSunWanted } from "./band-advice";
 // lib/catalog/climate-bands.ts); metric alongside per PRODUCT.md "Units" (1 ft = 0.3048 m,
 // 1 mi = 1.609344 km).
 
-export type GuideHouse = {
-  name: string;
-  quantity: number;
-  exteriorShade: Shade;
-  vented: boolean;
-  chamberCount: number;
-  /** Mounts the model is built for: "pole", "building". */
-  mounts: readonly string[];
-  backToBackKit: boolean;
-};
-
-export type GuideClimate =
-  | {
-      known: true;
-      bandId: BandId;
-      /** Null when the band came from a saved site without its July high. */
-      julyHighF: number | null;
-      /** Where the band came from, in words: "your saved site check", "ZIP 85281", … */
-      basis: string;
-      nearEdgeNote: string | null;
-    }
-  | { known: false; reason: string };
-
-export type GuideSiteRule = {
-  name: string;
-  status: "good" | "fair" | "poor";
-  reason: string;
-  change?: string;
-};
-export type GuideSite = {
-  name: string;
-  label: "good" | "fair" | "poor";
-  rules: readonly GuideSiteRule[];
-};
-
-export type InstallGuideInput = {
-  houses: readonly GuideHouse[];
-  climate: GuideClimate;
-  site: GuideSite | null;
-  hemisphere: "north" | "south";
-};
-
-export type GuideItem = { topic: string; text: string };
-
-export type InstallGuide = {
-  climate: { heading: string; paragraphs: string[]; advice: GuideItem[] };
-  /** Where and how to mount, the same for every house of the order. */
-  mounting: GuideItem[];
-  /** Per model: how it suits the band, and what is particular to it. */
-  houses: {
-    name: string;
-    quantity: number;
-    fit: { label: FitLabel; words: string; reasons: string[] } | null;
-    notes: GuideItem[];
-  }[];
-  site: { heading: string; summary: string; toChange: GuideItem[] } | null;
-  calendar: readonly UpkeepSeason[];
-  patience: { title: string; text: string };
-  cautions: readonly Caution[];
-};
-
+export type {
+  GuideClimate,
+  GuideHouse,
+  GuideItem,
+  GuideSite,
+  GuideSiteRule,
+  InstallGuide,
+  InstallGuideInput,
+} from "./install-guide-types";
 const SITE_LABEL_WORDS = {
   good: "a good spot",
   fair: "a workable spot with changes to make",

@@ -20,10 +20,10 @@ const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: async () => session.user }));
 vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 
-const { savePreferencesAction } = await import("@/app/(account)/account/preferences/actions");
-const { emailYearEndStatementAction } = await import("@/app/(account)/account/gifts/actions");
-const { unsubscribeAction } = await import("@/app/unsubscribe/actions");
-const { resendMailAction } = await import("@/app/admin/mail/actions");
+const { savePreferencesAction } = await import("@/lib/mail/actions");
+const { emailYearEndStatementAction } = await import("@/lib/mail/actions");
+const { unsubscribeAction } = await import("@/lib/mail/actions");
+const { resendMailAction } = await import("@/lib/mail/actions");
 const { POST: oneClickPost } = await import("@/app/api/account/unsubscribe/route");
 
 let payments: Awaited<ReturnType<typeof startTestPayments>>;

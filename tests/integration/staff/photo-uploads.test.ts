@@ -7,7 +7,7 @@ vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 
 import { GET as getPhotos, POST as uploadPhoto } from "@/app/api/staff/models/[slug]/photos/route";
 import { GET as getMedia } from "@/app/media/[...key]/route";
-import { removePhotoAction, reorderPhotosAction } from "@/app/staff/models/[slug]/photos/actions";
+import { removePhotoAction, reorderPhotosAction } from "@/lib/staff/actions";
 import { modelPhotos } from "@/db/schema";
 import { seedDemo } from "@/lib/demo/commands";
 import { getSessionUser } from "@/lib/auth/session";

@@ -10,8 +10,8 @@ import {
   retireModelAction,
   returnModelToDraftsAction,
   updateModelAction,
-} from "@/app/staff/models/actions";
-import { recordInspectionAction } from "@/app/staff/models/[slug]/inspections/actions";
+} from "@/lib/staff/actions";
+import { recordInspectionAction } from "@/lib/staff/actions";
 import { getDb } from "@/db/client";
 import { houseModels, inspections, orderLines, orders } from "@/db/schema";
 import { seedDemo } from "@/lib/demo/commands";

@@ -7,10 +7,7 @@ vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 import * as modelsRoute from "@/app/api/staff/models/route";
 import * as photosRoute from "@/app/api/staff/models/[slug]/photos/route";
 import * as ledgerRoute from "@/app/api/staff/models/[slug]/stock-movements/route";
-import * as modelActions from "@/app/staff/models/actions";
-import * as photoActions from "@/app/staff/models/[slug]/photos/actions";
-import * as inspectionActions from "@/app/staff/models/[slug]/inspections/actions";
-import * as stockActions from "@/app/staff/models/[slug]/stock/actions";
+import * as staffActions from "@/lib/staff/actions";
 import { getDb } from "@/db/client";
 import { houseModels, inspections, modelPhotos, stockMovements } from "@/db/schema";
 import { seedDemo } from "@/lib/demo/commands";
@@ -135,46 +132,46 @@ const CALLS: Call[] = [
   },
   {
     name: "createModelAction",
-    run: async () => fromAction(await modelActions.createModelAction(modelInput())),
+    run: async () => fromAction(await staffActions.createModelAction(modelInput())),
   },
   {
     name: "updateModelAction",
     run: async () =>
-      fromAction(await modelActions.updateModelAction({ id: modelId, ...modelInput() })),
+      fromAction(await staffActions.updateModelAction({ id: modelId, ...modelInput() })),
   },
   {
     name: "publishModelAction",
-    run: async () => fromAction(await modelActions.publishModelAction({ id: modelId })),
+    run: async () => fromAction(await staffActions.publishModelAction({ id: modelId })),
   },
   {
     name: "retireModelAction",
-    run: async () => fromAction(await modelActions.retireModelAction({ id: modelId })),
+    run: async () => fromAction(await staffActions.retireModelAction({ id: modelId })),
   },
   {
     name: "returnModelToDraftsAction",
-    run: async () => fromAction(await modelActions.returnModelToDraftsAction({ id: modelId })),
+    run: async () => fromAction(await staffActions.returnModelToDraftsAction({ id: modelId })),
   },
   {
     name: "removePhotoAction",
-    run: async () => fromAction(await photoActions.removePhotoAction({ id: PHOTO_ID })),
+    run: async () => fromAction(await staffActions.removePhotoAction({ id: PHOTO_ID })),
   },
   {
     name: "reorderPhotosAction",
     run: async () =>
-      fromAction(await photoActions.reorderPhotosAction({ modelId, photoIds: [PHOTO_ID] })),
+      fromAction(await staffActions.reorderPhotosAction({ modelId, photoIds: [PHOTO_ID] })),
   },
   {
     name: "updatePhotoAltAction",
     run: async () =>
       fromAction(
-        await photoActions.updatePhotoAltAction({ id: PHOTO_ID, altText: "A house on a pole" }),
+        await staffActions.updatePhotoAltAction({ id: PHOTO_ID, altText: "A house on a pole" }),
       ),
   },
   {
     name: "recordInspectionAction",
     run: async () =>
       fromAction(
-        await inspectionActions.recordInspectionAction({
+        await staffActions.recordInspectionAction({
           modelId,
           measured: {
             chamberGapIn: 0.75,
@@ -194,7 +191,7 @@ const CALLS: Call[] = [
     name: "receiveStockAction",
     run: async () =>
       fromAction(
-        await stockActions.receiveStockAction({
+        await staffActions.receiveStockAction({
           modelId,
           count: 2,
           batch: "b1",
@@ -207,7 +204,7 @@ const CALLS: Call[] = [
     name: "adjustStockAction",
     run: async () =>
       fromAction(
-        await stockActions.adjustStockAction({ modelId, reason: "damaged", change: -1, note: "" }),
+        await staffActions.adjustStockAction({ modelId, reason: "damaged", change: -1, note: "" }),
       ),
   },
 ];
@@ -273,24 +270,24 @@ describe("the staff role matrix", () => {
       "pageSize: Show 10, 25 or 50 models a page.",
     );
     const results = [
-      await modelActions.createModelAction({ ...modelInput(), name: "" }),
-      await modelActions.publishModelAction({ id: "not-a-uuid" }),
-      await stockActions.adjustStockAction({ modelId, reason: "stolen", change: -1, note: "" }),
-      await stockActions.receiveStockAction({
+      await staffActions.createModelAction({ ...modelInput(), name: "" }),
+      await staffActions.publishModelAction({ id: "not-a-uuid" }),
+      await staffActions.adjustStockAction({ modelId, reason: "stolen", change: -1, note: "" }),
+      await staffActions.receiveStockAction({
         modelId,
         count: 0,
         batch: "b",
         builderName: "Hollow Creek",
         note: "",
       }),
-      await inspectionActions.recordInspectionAction({
+      await staffActions.recordInspectionAction({
         modelId,
         measured: {},
         inspector: "T",
         inspectedOn: "yesterday",
         notes: "",
       }),
-      await photoActions.updatePhotoAltAction({ id: PHOTO_ID, altText: "" }),
+      await staffActions.updatePhotoAltAction({ id: PHOTO_ID, altText: "" }),
     ];
     for (const r of results) {
       expect(r.ok).toBe(false);

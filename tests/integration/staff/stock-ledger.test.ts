@@ -4,7 +4,7 @@ import { beforeEach, describe, expect, it, vi } from "vitest";
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: vi.fn(async () => null) }));
 vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 
-import { adjustStockAction, receiveStockAction } from "@/app/staff/models/[slug]/stock/actions";
+import { adjustStockAction, receiveStockAction } from "@/lib/staff/actions";
 import { GET as getLedger } from "@/app/api/staff/models/[slug]/stock-movements/route";
 import { getDb } from "@/db/client";
 import { houseModels, stockMovements } from "@/db/schema";

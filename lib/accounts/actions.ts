@@ -2,9 +2,17 @@
 
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { setUserRole } from "@/lib/accounts/users";
+import { createCustomer, setUserRole } from "@/lib/accounts/users";
+import { signUpSchema } from "@/lib/auth/password-policy";
 import { ROLES } from "@/lib/auth/roles";
 import { action } from "@/lib/http/action";
+
+// Server actions for accounts; each checks the session and role on the server (`action`).
+
+export const signUpAction = action({ public: true }, signUpSchema, async (input) => {
+  const user = await createCustomer(input);
+  return { id: user.id };
+});
 
 const setRoleSchema = z.object({
   userId: z.uuid("Choose an account."),

@@ -1,0 +1,70 @@
+import type { BandId } from "@/lib/catalog/climate-bands";
+import type { FitLabel } from "@/lib/catalog/fit";
+import type { Shade } from "@/lib/catalog/spec";
+import type { Caution } from "@/lib/safety/cautions";
+import type { UpkeepSeason } from "./upkeep-calendar";
+
+// The shapes of the install guide: what goes in (the order's houses, climate and site) and what
+// comes out. Apart from the content rules so band-advice.ts and install-guide-content.ts can both
+// use them without importing each other.
+
+export type GuideHouse = {
+  name: string;
+  quantity: number;
+  exteriorShade: Shade;
+  vented: boolean;
+  chamberCount: number;
+  /** Mounts the model is built for: "pole", "building". */
+  mounts: readonly string[];
+  backToBackKit: boolean;
+};
+
+export type GuideClimate =
+  | {
+      known: true;
+      bandId: BandId;
+      /** Null when the band came from a saved site without its July high. */
+      julyHighF: number | null;
+      /** Where the band came from, in words: "your saved site check", "ZIP 85281", … */
+      basis: string;
+      nearEdgeNote: string | null;
+    }
+  | { known: false; reason: string };
+
+export type GuideSiteRule = {
+  name: string;
+  status: "good" | "fair" | "poor";
+  reason: string;
+  change?: string;
+};
+export type GuideSite = {
+  name: string;
+  label: "good" | "fair" | "poor";
+  rules: readonly GuideSiteRule[];
+};
+
+export type InstallGuideInput = {
+  houses: readonly GuideHouse[];
+  climate: GuideClimate;
+  site: GuideSite | null;
+  hemisphere: "north" | "south";
+};
+
+export type GuideItem = { topic: string; text: string };
+
+export type InstallGuide = {
+  climate: { heading: string; paragraphs: string[]; advice: GuideItem[] };
+  /** Where and how to mount, the same for every house of the order. */
+  mounting: GuideItem[];
+  /** Per model: how it suits the band, and what is particular to it. */
+  houses: {
+    name: string;
+    quantity: number;
+    fit: { label: FitLabel; words: string; reasons: string[] } | null;
+    notes: GuideItem[];
+  }[];
+  site: { heading: string; summary: string; toChange: GuideItem[] } | null;
+  calendar: readonly UpkeepSeason[];
+  patience: { title: string; text: string };
+  cautions: readonly Caution[];
+};
