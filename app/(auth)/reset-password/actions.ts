@@ -1,7 +1,7 @@
 "use server";
 
 import { action } from "@/lib/http/action";
-import { resetPassword } from "@/lib/mail/password-reset";
+import { resetPassword } from "@/lib/mail/commands/password-reset";
 import { resetPasswordSchema } from "@/lib/mail/password-reset-schemas";
 
 export const resetPasswordAction = action(

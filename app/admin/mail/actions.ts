@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { action } from "@/lib/http/action";
-import { resendOutboxMessage } from "@/lib/mail/admin-queries";
+import { resendOutboxMessage } from "@/lib/mail/commands/outbox";
 
 const resendSchema = z.object({ id: z.uuid("Choose a message.") });
 

@@ -2,7 +2,7 @@
 
 import { action } from "@/lib/http/action";
 import { yearEndRequestSchema } from "@/lib/mail/account-schemas";
-import { requestYearEndStatement } from "@/lib/mail/donor-gifts";
+import { requestYearEndStatement } from "@/lib/mail/commands/year-end";
 
 export const emailYearEndStatementAction = action(
   { permission: "account" },

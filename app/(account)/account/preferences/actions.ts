@@ -2,7 +2,7 @@
 
 import { action } from "@/lib/http/action";
 import { preferencesSchema } from "@/lib/mail/account-schemas";
-import { setSeasonalReminders } from "@/lib/mail/preferences";
+import { setSeasonalReminders } from "@/lib/mail/commands/preferences";
 
 export const savePreferencesAction = action(
   { permission: "account" },
