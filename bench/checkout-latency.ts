@@ -15,11 +15,11 @@ const { eq } = await import("drizzle-orm");
 const { getDb, closeDb } = await import("@/db/client");
 const { houseModels, orders } = await import("@/db/schema");
 const { seedDemo } = await import("@/lib/demo/commands");
-const { quoteFromDatabase } = await import("@/lib/checkout/quote-service");
-const { startCheckout } = await import("@/lib/checkout/orders");
+const { quoteFromDatabase } = await import("@/lib/checkout/queries/quote");
+const { startCheckout } = await import("@/lib/checkout/commands/orders");
 const { getPayments } = await import("@/lib/checkout/payments");
 const { verifyWebhook } = await import("@/lib/checkout/payments");
-const { processPaymentEvent } = await import("@/lib/checkout/webhooks");
+const { processPaymentEvent } = await import("@/lib/checkout/commands/webhooks");
 const { startPaymentsStandIn } = await import("@/stand-ins/payments/server");
 
 const N = Number(process.argv[2] ?? 200);

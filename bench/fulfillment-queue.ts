@@ -9,7 +9,7 @@ export {};
 const { getDb, closeDb } = await import("@/db/client");
 const { seedDemo } = await import("@/lib/demo/commands");
 const { houseModels, orderLines, orders, parcels } = await import("@/db/schema");
-const { listQueueOrders, summarizeQueue } = await import("@/lib/fulfillment/queue");
+const { listQueueOrders, summarizeQueue } = await import("@/lib/fulfillment/queries/queue");
 const { queueParamsSchema } = await import("@/lib/fulfillment/queue-params");
 
 const ORDERS = 10_000;

@@ -14,6 +14,7 @@ import {
   uniqueIndex,
   uuid,
 } from "drizzle-orm/pg-core";
+import { ORDER_STATUSES } from "./order-statuses";
 
 // Lengths are stored in inches, weights in pounds, money in integer cents, times in UTC.
 
@@ -217,19 +218,7 @@ export const taxRates = pgTable(
   (t) => [check("tax_rates_range", sql`${t.basisPoints} >= 0 and ${t.basisPoints} <= 2000`)],
 );
 
-export const orderStatusEnum = pgEnum("order_status", [
-  "pending_payment",
-  "paid",
-  "packing",
-  "packed",
-  "shipped",
-  "delivered",
-  "ready_for_pickup",
-  "picked_up",
-  "cancelled",
-  "expired",
-  "refunded",
-]);
+export const orderStatusEnum = pgEnum("order_status", ORDER_STATUSES);
 export const shippingMethodEnum = pgEnum("shipping_method", ["parcel", "pickup", "none"]);
 
 export const orders = pgTable(
@@ -332,18 +321,50 @@ export const parcels = pgTable(
   (t) => [index("parcels_order_idx").on(t.orderId)],
 );
 
-export const refunds = pgTable("refunds", {
-  id: uuid("id").primaryKey().defaultRandom(),
-  orderId: uuid("order_id")
-    .notNull()
-    .references(() => orders.id),
-  providerRefundId: text("provider_refund_id").notNull().unique(),
-  amountCents: integer("amount_cents").notNull(),
-  reason: text("reason").notNull().default(""),
-  restocked: boolean("restocked").notNull().default(false),
-  actorId: uuid("actor_id").references(() => users.id),
-  createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
-});
+export const refundStatusEnum = pgEnum("refund_status", ["requested", "succeeded", "failed"]);
+export const refundCauseEnum = pgEnum("refund_cause", ["cancel", "refund", "automatic"]);
+
+/**
+ * Money going back to a buyer. The row is written first, in the transaction that decides the
+ * refund (status "requested", with its idempotency key); the payment service is called only
+ * after that commits, and its answer is recorded by a follow-up that is safe to repeat
+ * (lib/checkout/commands/refunds.ts). A sweeper retries requested refunds that were never
+ * confirmed. Rows from before this flow were recorded after the call, hence the defaults.
+ */
+export const refunds = pgTable(
+  "refunds",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id")
+      .notNull()
+      .references(() => orders.id),
+    /** The payment service's refund id, once it has answered. */
+    providerRefundId: text("provider_refund_id").unique(),
+    /** Sent with every call for this refund, so a repeated call never refunds twice. */
+    idempotencyKey: text("idempotency_key")
+      .notNull()
+      .unique()
+      .default(sql`gen_random_uuid()::text`),
+    paymentIntentId: text("payment_intent_id"),
+    status: refundStatusEnum("status").notNull().default("succeeded"),
+    /** Which message the buyer gets once the money has moved. */
+    cause: refundCauseEnum("cause").notNull().default("refund"),
+    amountCents: integer("amount_cents").notNull(),
+    reason: text("reason").notNull().default(""),
+    restocked: boolean("restocked").notNull().default(false),
+    actorId: uuid("actor_id").references(() => users.id),
+    attempts: integer("attempts").notNull().default(0),
+    nextAttemptAt: timestamp("next_attempt_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+    lastError: text("last_error"),
+    confirmedAt: timestamp("confirmed_at", { withTimezone: true, mode: "date" }),
+    createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [
+    index("refunds_order_idx").on(t.orderId),
+    index("refunds_requested_idx").on(t.status, t.nextAttemptAt),
+    check("refunds_amount", sql`${t.amountCents} > 0`),
+  ],
+);
 
 /** Conservation gifts, recorded when their payment succeeds. */
 export const gifts = pgTable(
@@ -430,6 +451,7 @@ export type OrderRow = typeof orders.$inferSelect;
 export type OrderLineRow = typeof orderLines.$inferSelect;
 export type ParcelRow = typeof parcels.$inferSelect;
 export type OutboxRow = typeof outbox.$inferSelect;
+export type RefundRow = typeof refunds.$inferSelect;
 export type SiteRow = typeof sites.$inferSelect;
 export type InspectionRow = typeof inspections.$inferSelect;
 export type StockMovementRow = typeof stockMovements.$inferSelect;

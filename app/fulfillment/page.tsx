@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { QueueBrowser } from "@/components/fulfillment/queue-browser";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { requirePageUser } from "@/lib/auth/guard";
-import { listQueueOrders, summarizeQueue } from "@/lib/fulfillment/queue";
+import { listQueueOrders, summarizeQueue } from "@/lib/fulfillment/queries/queue";
 import { queueParamsFromSearch } from "@/lib/fulfillment/queue-params";
 
 export const metadata: Metadata = { title: "Shipping desk" };

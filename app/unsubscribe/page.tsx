@@ -3,7 +3,7 @@ import { UnsubscribeButton } from "@/components/account/unsubscribe-button";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
-import { findSubscriptionByToken } from "@/lib/mail/preferences";
+import { findSubscriptionByToken } from "@/lib/mail/queries/preferences";
 
 // The token is in the URL: keep it out of Referer headers and out of search engines.
 export const metadata: Metadata = {

@@ -13,7 +13,7 @@ import { Select } from "@/components/ui/select";
 import { Textarea } from "@/components/ui/textarea";
 import { formatUsd } from "@/lib/checkout/money";
 import { refundSchema, transitionSchema, type RefundInput, type TransitionInput } from "@/lib/fulfillment/schemas";
-import { FULFILLMENT_STATE_LABELS, type FulfillmentState } from "@/lib/fulfillment/state-labels";
+import { ORDER_STATUS_LABELS, type FulfillmentState } from "@/lib/orders/statuses";
 import { ConflictNotice } from "./conflict-notice";
 import { useOrderAction } from "./use-order-action";
 
@@ -69,7 +69,7 @@ function CorrectionForm({ orderId, version, corrections, action }: { orderId: st
         <Select {...form.register("to")}>
           {corrections.map((s) => (
             <option key={s} value={s}>
-              {FULFILLMENT_STATE_LABELS[s].label}
+              {ORDER_STATUS_LABELS[s].label}
             </option>
           ))}
         </Select>

@@ -1,8 +1,8 @@
-import type { DetailEvent } from "@/lib/fulfillment/order-detail";
-import { FULFILLMENT_STATE_LABELS, isFulfillmentState } from "@/lib/fulfillment/state-labels";
+import type { DetailEvent } from "@/lib/fulfillment/queries/order-detail";
+import { ORDER_STATUS_LABELS, isFulfillmentState } from "@/lib/orders/statuses";
 import { formatStoreDateTime } from "@/lib/fulfillment/store-time";
 
-const label = (s: string | null) => (s && isFulfillmentState(s) ? FULFILLMENT_STATE_LABELS[s].label : (s ?? "—"));
+const label = (s: string | null) => (s && isFulfillmentState(s) ? ORDER_STATUS_LABELS[s].label : (s ?? "—"));
 
 /** Every change to the order, newest first: who, when, from where to where, and why. */
 export function HistoryList({ events }: { events: DetailEvent[] }) {

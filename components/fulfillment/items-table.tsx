@@ -1,6 +1,6 @@
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
 import { DIM_DIVISOR_CUBIC_IN_PER_LB } from "@/lib/checkout/billable-weight";
-import type { DetailLine } from "@/lib/fulfillment/order-detail";
+import type { DetailLine } from "@/lib/fulfillment/queries/order-detail";
 
 const inches = (n: number) => `${Number.isInteger(n) ? n : n.toFixed(1)}`;
 

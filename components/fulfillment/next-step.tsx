@@ -4,7 +4,7 @@ import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { FormError } from "@/components/ui/form-error";
 import type { BoxDraft } from "@/lib/fulfillment/packing";
-import type { FulfillmentState } from "@/lib/fulfillment/state-labels";
+import type { FulfillmentState } from "@/lib/orders/statuses";
 import { ConflictNotice } from "./conflict-notice";
 import { PackForm } from "./pack-form";
 import type { NextStepBox } from "./ship-box";

@@ -1,6 +1,6 @@
 import { Card } from "@/components/ui/card";
 import { formatUsd } from "@/lib/checkout/money";
-import type { FulfillmentOrder } from "@/lib/fulfillment/order-detail";
+import type { FulfillmentOrder } from "@/lib/fulfillment/queries/order-detail";
 import { formatStoreDateTime } from "@/lib/fulfillment/store-time";
 
 /** Who bought it, where it goes, when it was paid and what has been refunded. */

@@ -1,6 +1,6 @@
 import { formatOrderNumber } from "@/lib/checkout/order-number";
-import type { CenterDetails } from "@/lib/fulfillment/center";
-import type { FulfillmentOrder } from "@/lib/fulfillment/order-detail";
+import type { CenterDetails } from "@/lib/fulfillment/queries/center";
+import type { FulfillmentOrder } from "@/lib/fulfillment/queries/order-detail";
 import { formatStoreDate } from "@/lib/fulfillment/store-time";
 
 // What goes in the box: what should be inside, where the install guide is, the safety

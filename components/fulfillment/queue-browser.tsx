@@ -9,7 +9,7 @@ import { cn } from "@/components/ui/cn";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Spinner } from "@/components/ui/spinner";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
-import type { QueuePage, QueueSummary } from "@/lib/fulfillment/queue";
+import type { QueuePage, QueueSummary } from "@/lib/fulfillment/queries/queue";
 import { DEFAULT_QUEUE_PARAMS, queueParamsToSearch, type QueueParams, type QueueSort } from "@/lib/fulfillment/queue-params";
 import { queueColumns } from "./queue-columns";
 import { QueueCounts } from "./queue-counts";

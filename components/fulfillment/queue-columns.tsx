@@ -3,7 +3,7 @@
 import { createColumnHelper } from "@tanstack/react-table";
 import Link from "next/link";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
-import type { QueueRow } from "@/lib/fulfillment/queue";
+import type { QueueRow } from "@/lib/fulfillment/queries/queue";
 import type { QueueSort } from "@/lib/fulfillment/queue-params";
 import { formatStoreDate, formatWaiting } from "@/lib/fulfillment/store-time";
 import { StateBadge } from "./state-badge";

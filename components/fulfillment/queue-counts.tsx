@@ -3,9 +3,9 @@
 import Link from "next/link";
 import { cn } from "@/components/ui/cn";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
-import type { QueueSummary } from "@/lib/fulfillment/queue";
+import type { QueueSummary } from "@/lib/fulfillment/queries/queue";
 import { OPEN_STATES, type QueueStateFilter } from "@/lib/fulfillment/queue-params";
-import { FULFILLMENT_STATE_LABELS } from "@/lib/fulfillment/state-labels";
+import { ORDER_STATUS_LABELS } from "@/lib/orders/statuses";
 import { formatStoreDate, formatWaiting } from "@/lib/fulfillment/store-time";
 
 type Props = { summary: QueueSummary; now: Date; active: QueueStateFilter; onPick: (state: QueueStateFilter) => void };
@@ -32,7 +32,7 @@ export function QueueCounts({ summary, now, active, onPick }: Props) {
               )}
             >
               <span className="font-display text-3xl font-semibold text-moss-900">{summary.counts[state]}</span>
-              <span className="text-sm font-bold text-ink-soft">{FULFILLMENT_STATE_LABELS[state].label}</span>
+              <span className="text-sm font-bold text-ink-soft">{ORDER_STATUS_LABELS[state].label}</span>
             </button>
           </li>
         ))}
@@ -44,7 +44,7 @@ export function QueueCounts({ summary, now, active, onPick }: Props) {
             {formatOrderNumber(oldest.number)}
           </Link>{" "}
           for {oldest.name}, paid {formatStoreDate(oldest.paidAt)} ({formatWaiting({ since: oldest.paidAt, now })} ago),{" "}
-          {FULFILLMENT_STATE_LABELS[oldest.status].label.toLowerCase()}.
+          {ORDER_STATUS_LABELS[oldest.status].label.toLowerCase()}.
         </p>
       ) : (
         <p className="rounded-xl border border-moss-200 bg-moss-50 p-4 text-moss-900">Nothing is waiting at the packing bench.</p>

@@ -3,7 +3,7 @@
 import { Button } from "@/components/ui/button";
 import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
-import { FULFILLMENT_STATE_LABELS } from "@/lib/fulfillment/state-labels";
+import { ORDER_STATUS_LABELS } from "@/lib/orders/statuses";
 import { PAID_STATES, type QueueParams } from "@/lib/fulfillment/queue-params";
 
 type Props = {
@@ -29,7 +29,7 @@ export function QueueFilters({ params, searchText, onSearchText, onChange, onRes
           <option value="open">Needs work</option>
           {PAID_STATES.map((s) => (
             <option key={s} value={s}>
-              {FULFILLMENT_STATE_LABELS[s].label}
+              {ORDER_STATUS_LABELS[s].label}
             </option>
           ))}
           <option value="all">Every paid order</option>

@@ -2,7 +2,7 @@
 
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/select";
-import type { QueuePage } from "@/lib/fulfillment/queue";
+import type { QueuePage } from "@/lib/fulfillment/queries/queue";
 import { PAGE_SIZES } from "@/lib/fulfillment/queue-params";
 
 /** Previous / next and how many rows a page holds. */

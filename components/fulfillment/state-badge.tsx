@@ -1,5 +1,5 @@
 import { Badge, type BadgeTone } from "@/components/ui/badge";
-import { FULFILLMENT_STATE_LABELS, isFulfillmentState } from "@/lib/fulfillment/state-labels";
+import { ORDER_STATUS_LABELS, isFulfillmentState } from "@/lib/orders/statuses";
 
 // Warm tones where a volunteer has work to do, green where the order is done.
 const TONES: Record<string, BadgeTone> = {
@@ -15,6 +15,6 @@ const TONES: Record<string, BadgeTone> = {
 };
 
 export function StateBadge({ status }: { status: string }) {
-  const label = isFulfillmentState(status) ? FULFILLMENT_STATE_LABELS[status].label : status;
+  const label = isFulfillmentState(status) ? ORDER_STATUS_LABELS[status].label : status;
   return <Badge tone={TONES[status] ?? "neutral"}>{label}</Badge>;
 }

@@ -1,4 +1,4 @@
-import { getBuyerParcels } from "@/lib/fulfillment/buyer-view";
+import { getBuyerParcels } from "@/lib/fulfillment/queries/buyer-view";
 import { formatStoreDate } from "@/lib/fulfillment/store-time";
 
 /**

@@ -1,4 +1,4 @@
-import { getBuyerTimeline } from "@/lib/fulfillment/buyer-view";
+import { getBuyerTimeline } from "@/lib/fulfillment/queries/buyer-view";
 import { formatStoreDateTime } from "@/lib/fulfillment/store-time";
 
 /**

@@ -1,6 +1,6 @@
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { toCsv } from "./csv";
-import { FULFILLMENT_STATE_LABELS, isFulfillmentState } from "./state-labels";
+import { ORDER_STATUS_LABELS, isFulfillmentState } from "@/lib/orders/statuses";
 import { formatStoreDateTime } from "./store-time";
 
 // The queue as a spreadsheet: the columns a volunteer prints or hands to the carrier's pickup.
@@ -39,7 +39,7 @@ export function queueToCsv(rows: readonly ExportRow[]): string {
       formatOrderNumber(r.number),
       r.name,
       r.email,
-      isFulfillmentState(r.status) ? FULFILLMENT_STATE_LABELS[r.status].label : r.status,
+      isFulfillmentState(r.status) ? ORDER_STATUS_LABELS[r.status].label : r.status,
       r.method === "pickup" ? "Local pickup" : "Parcel",
       r.paidAt ? formatStoreDateTime(r.paidAt) : "",
       r.houses,

@@ -1,25 +1,16 @@
 import { z } from "zod";
-import type { FulfillmentState } from "./state-labels";
+import { OPEN_STATES } from "@/lib/orders/state-machine";
+import { PAID_STATES, type PaidState } from "@/lib/orders/statuses";
 
 // What the shipping desk's queue can be asked for: the same schema parses the page's address,
 // the JSON route and the CSV export, so all three always show the same orders.
 
-/** States where a volunteer still has something to do; "open" is the queue's default view. */
-export const OPEN_STATES = ["paid", "packing", "packed", "shipped", "ready_for_pickup"] as const satisfies readonly FulfillmentState[];
+// The states come from lib/orders: "open" is every paid state with a next step for a volunteer
+// (derived from the state machine) and "all" every paid state (unpaid and expired checkouts never
+// reach the desk).
+export { OPEN_STATES, PAID_STATES };
 /** States at the packing bench: the oldest of these is the one to start with. */
-export const BENCH_STATES = ["paid", "packing", "packed"] as const satisfies readonly FulfillmentState[];
-/** Every state a paid order can be in (unpaid and expired checkouts never reach the desk). */
-export const PAID_STATES = [
-  "paid",
-  "packing",
-  "packed",
-  "shipped",
-  "delivered",
-  "ready_for_pickup",
-  "picked_up",
-  "cancelled",
-  "refunded",
-] as const satisfies readonly FulfillmentState[];
+export const BENCH_STATES = ["paid", "packing", "packed"] as const satisfies readonly PaidState[];
 
 export const QUEUE_STATE_FILTERS = ["open", ...PAID_STATES, "all"] as const;
 export type QueueStateFilter = (typeof QUEUE_STATE_FILTERS)[number];
@@ -67,7 +58,7 @@ export type QueueParams = z.infer<typeof queueParamsSchema>;
 export const DEFAULT_QUEUE_PARAMS: QueueParams = queueParamsSchema.parse({});
 
 /** The order states a filter stands for. */
-export function statusesFor(state: QueueStateFilter): FulfillmentState[] {
+export function statusesFor(state: QueueStateFilter): PaidState[] {
   if (state === "open") return [...OPEN_STATES];
   if (state === "all") return [...PAID_STATES];
   return [state];

@@ -1,5 +1,5 @@
 import "server-only";
-import { listQueueOrdersForExport } from "./queue";
+import { listQueueOrdersForExport } from "./queries/queue";
 import { queueCsvFileName, queueToCsv } from "./queue-csv";
 import type { QueueParams } from "./queue-params";
 

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { FULFILLMENT_STATES } from "./state-labels";
+import { FULFILLMENT_STATES } from "@/lib/orders/statuses";
 import { CARRIERS, validateTrackingNumber } from "./tracking";
 
 // One schema per action on the order page, shared by its form and its route handler. Every

@@ -1,4 +1,5 @@
-import { FULFILLMENT_STATE_LABELS, isFulfillmentState } from "./state-labels";
+import { isCorrection } from "@/lib/orders/state-machine";
+import { isOrderStatus, ORDER_STATUS_LABELS } from "@/lib/orders/statuses";
 
 // The buyer's view of an order's history: state changes only, in the store's words. Staff notes
 // (an admin's reason, a failed card's message) stay on the staff side; they may name people or
@@ -19,35 +20,8 @@ export type TimelineEntry = {
   corrected: boolean;
 };
 
-// Our own words for the two states the fulfillment labels leave out (they never reach the desk).
-const EXTRA_WORDS: Record<string, { label: string; buyerNote: string }> = {
-  expired: {
-    label: "Checkout closed",
-    buyerNote: "The payment didn't arrive within 30 minutes, so the houses went back on the shelf.",
-  },
-};
-
-const FORWARD_ORDER = [
-  "pending_payment",
-  "paid",
-  "packing",
-  "packed",
-  "shipped",
-  "delivered",
-  "ready_for_pickup",
-  "picked_up",
-];
-
 function wordsFor(state: string): { label: string; buyerNote: string } {
-  if (isFulfillmentState(state)) return FULFILLMENT_STATE_LABELS[state];
-  return EXTRA_WORDS[state] ?? { label: "Updated", buyerNote: "" };
-}
-
-function isStepBack(from: string | null, to: string): boolean {
-  if (!from) return false;
-  const a = FORWARD_ORDER.indexOf(from);
-  const b = FORWARD_ORDER.indexOf(to);
-  return a >= 0 && b >= 0 && b < a;
+  return isOrderStatus(state) ? ORDER_STATUS_LABELS[state] : { label: "Updated", buyerNote: "" };
 }
 
 /** Oldest first; repeated attempts in one state (a declined card) are left out. */
@@ -57,7 +31,7 @@ export function buyerTimeline(events: readonly OrderEventForTimeline[]): Timelin
     .sort((a, b) => a.createdAt.getTime() - b.createdAt.getTime())
     .map((e) => {
       const words = wordsFor(e.toStatus);
-      const corrected = isStepBack(e.fromStatus, e.toStatus);
+      const corrected = isCorrection(e.fromStatus, e.toStatus);
       return {
         at: e.createdAt,
         state: e.toStatus,

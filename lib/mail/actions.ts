@@ -4,11 +4,11 @@ import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { action } from "@/lib/http/action";
 import { preferencesSchema, unsubscribeSchema, yearEndRequestSchema } from "@/lib/mail/account-schemas";
-import { resendOutboxMessage } from "@/lib/mail/admin-queries";
-import { requestYearEndStatement } from "@/lib/mail/donor-gifts";
-import { requestPasswordReset, resetPassword } from "@/lib/mail/password-reset";
+import { resendOutboxMessage } from "@/lib/mail/commands/outbox";
+import { requestYearEndStatement } from "@/lib/mail/commands/year-end";
+import { requestPasswordReset, resetPassword } from "@/lib/mail/commands/password-reset";
 import { forgotPasswordSchema, RESET_REQUESTED_MESSAGE, resetPasswordSchema } from "@/lib/mail/password-reset-schemas";
-import { setSeasonalReminders, unsubscribeByToken } from "@/lib/mail/preferences";
+import { setSeasonalReminders, unsubscribeByToken } from "@/lib/mail/commands/preferences";
 
 // Server actions for e-mail: preferences, statements, password resets and the admin's "send
 // again". Each checks the session and role on the server (`action`).

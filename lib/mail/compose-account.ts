@@ -1,8 +1,6 @@
 import "server-only";
 import { createElement } from "react";
-import { and, asc, eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
-import { emailPreferences, gifts, houseModels, orders, users } from "@/db/schema";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { yearEndStatement } from "@/lib/checkout/receipts";
 import { env } from "@/lib/config/env";
@@ -13,7 +11,8 @@ import { SeasonalReminderEmail } from "@/emails/seasonal-reminder";
 import { YearEndStatementEmail } from "@/emails/year-end-statement";
 import type { Composition } from "./composition";
 import { formatMailDate } from "./format";
-import { loadOrgFooter } from "./load-order";
+import { findModelForAlert, findReminderSubscription, listGiftsForStatement, loadUser } from "./queries/account-for-mail";
+import { loadOrgFooter } from "./queries/order-for-mail";
 import {
   lowStockPayloadSchema,
   parsePayload,
@@ -27,15 +26,6 @@ import { REMINDER_WINDOWS } from "./seasons";
 import { unsubscribeLinks } from "./unsubscribe-links";
 import { RESET_TOKEN_TTL_MS } from "./tokens";
 import { getUpkeepSeason } from "./upkeep-calendar";
-
-async function loadUser(db: DbOrTx, userId: string) {
-  const [user] = await db
-    .select({ id: users.id, name: users.name, email: users.email })
-    .from(users)
-    .where(eq(users.id, userId));
-  if (!user) throw new PermanentMailError(`User ${userId} no longer exists.`);
-  return user;
-}
 
 async function passwordReset(db: DbOrTx, payload: unknown): Promise<Composition> {
   const parsed = parsePayload({
@@ -71,17 +61,7 @@ async function yearEnd(db: DbOrTx, payload: unknown): Promise<Composition> {
     kind: "year-end-statement",
   });
   const user = await loadUser(db, userId);
-  const rows = await db
-    .select({
-      date: gifts.receivedAt,
-      amountCents: gifts.amountCents,
-      orderId: gifts.orderId,
-      number: orders.number,
-    })
-    .from(gifts)
-    .innerJoin(orders, eq(orders.id, gifts.orderId))
-    .where(eq(gifts.userId, userId))
-    .orderBy(asc(gifts.receivedAt));
+  const rows = await listGiftsForStatement({ db, userId });
   const statement = yearEndStatement({ gifts: rows, year });
   const numbers = new Map(rows.map((row) => [row.orderId, formatOrderNumber(row.number)]));
   return {
@@ -108,10 +88,7 @@ async function seasonal(db: DbOrTx, payload: unknown): Promise<Composition> {
     kind: "seasonal-reminder",
   });
   const user = await loadUser(db, userId);
-  const [preferences] = await db
-    .select()
-    .from(emailPreferences)
-    .where(and(eq(emailPreferences.userId, userId), eq(emailPreferences.seasonalReminders, true)));
+  const preferences = await findReminderSubscription({ db, userId });
   // Turned off between queueing and sending: the wish to stop wins.
   if (!preferences)
     throw new PermanentMailError("Not sent: the recipient turned seasonal reminders off.");
@@ -139,10 +116,7 @@ async function lowStock(db: DbOrTx, payload: unknown): Promise<Composition> {
     kind: "low-stock",
   });
   const user = await loadUser(db, userId);
-  const [model] = await db
-    .select({ name: houseModels.name, slug: houseModels.slug })
-    .from(houseModels)
-    .where(eq(houseModels.id, modelId));
+  const model = await findModelForAlert({ db, modelId });
   if (!model) throw new PermanentMailError(`Model ${modelId} no longer exists.`);
   return {
     element: createElement(LowStockEmail, {

@@ -8,7 +8,7 @@ import { InstallGuideEmail } from "@/emails/install-guide";
 import type { Composition } from "./composition";
 import { resolveGuideContext } from "./guide-climate";
 import { buildInstallGuide, type GuideHouse } from "./install-guide-content";
-import { loadOrderForMail } from "./load-order";
+import { loadOrderForMail } from "./queries/order-for-mail";
 import { installGuidePayloadSchema, parsePayload, PermanentMailError } from "./payloads";
 
 // Only the spec fields the guide speaks of; the full spec is validated where it is written.

@@ -1,8 +1,6 @@
 import "server-only";
 import { createElement } from "react";
-import { eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
-import { gifts } from "@/db/schema";
 import { env } from "@/lib/config/env";
 import {
   CARRIER_LABELS,
@@ -19,7 +17,7 @@ import { RefundEmail } from "@/emails/refund";
 import { ShippedEmail } from "@/emails/shipped";
 import type { Composition } from "./composition";
 import { formatAddress, formatMailDate } from "./format";
-import { loadOrderForMail, type OrderForMail } from "./load-order";
+import { findGiftForOrder, loadOrderForMail, type OrderForMail } from "./queries/order-for-mail";
 import { receiptForOrder } from "./order-receipt";
 import {
   orderPayloadSchema,
@@ -65,7 +63,7 @@ function confirmation(data: OrderForMail): Composition {
 }
 
 async function giftReceipt(db: DbOrTx, data: OrderForMail): Promise<Composition> {
-  const [gift] = await db.select().from(gifts).where(eq(gifts.orderId, data.order.id));
+  const gift = await findGiftForOrder({ db, orderId: data.order.id });
   if (!gift) throw new PermanentMailError(`Order ${data.number} has no recorded gift.`);
   return {
     element: createElement(GiftReceiptEmail, {
@@ -150,12 +148,13 @@ export async function composeOrderMessage({
       };
     }
     case "payment-refunded": {
-      const { why } = parsePayload({ schema: paymentRefundedPayloadSchema, payload, kind });
+      const refunded = parsePayload({ schema: paymentRefundedPayloadSchema, payload, kind });
+      const { why } = refunded;
       return {
         element: createElement(PaymentRefundedEmail, {
           ...base,
           why,
-          amountCents: data.order.refundedCents || data.order.totalCents,
+          amountCents: refunded.amountCents ?? (data.order.refundedCents || data.order.totalCents),
           shopUrl: `${env().APP_URL}/houses`,
         }),
         replyTo,

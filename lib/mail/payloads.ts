@@ -1,8 +1,12 @@
 import { z } from "zod";
 import { REMINDER_IDS } from "./seasons";
 
-// What each kind of outbox message carries. Ids, not copies: the sender loads the order, the
-// gifts or the model at send time, so a message always shows the current record.
+// Every kind of message the store sends, with the payload its outbox row carries: the one list.
+// Queuing (enqueueEmail) refuses a kind that is not here and a payload its schema rejects; the
+// sender renders by the kind's family (lib/mail/render-message.ts). Ids, not copies: the sender
+// loads the order, the gifts or the model at send time, so a message always shows the current
+// record. To add a kind: its schema and entry here, its template in emails/, and its case in the
+// family's compose-*.ts. (The templates' own prop shapes are lib/mail/message-types.ts.)
 
 const id = z.uuid();
 
@@ -16,7 +20,12 @@ export const refundPayloadSchema = z.object({
   amountCents: z.number().int().positive(),
   cancelled: z.boolean().default(false),
 });
-export const paymentRefundedPayloadSchema = z.object({ orderId: id, why: z.string().min(1) });
+export const paymentRefundedPayloadSchema = z.object({
+  orderId: id,
+  why: z.string().min(1),
+  /** What went back; older messages without it show the order's total. */
+  amountCents: z.number().int().positive().optional(),
+});
 /** The token is sealed (lib/mail/sealed.ts) and removed from the row once the message is sent. */
 export const passwordResetPayloadSchema = z.object({ userId: id, sealedToken: z.string().min(1) });
 export const yearEndPayloadSchema = z.object({
@@ -36,14 +45,90 @@ export const lowStockPayloadSchema = z.object({
   threshold: z.number().int().min(0),
 });
 
-export type PasswordResetPayload = z.infer<typeof passwordResetPayloadSchema>;
-export type SeasonalPayload = z.infer<typeof seasonalPayloadSchema>;
-export type LowStockPayload = z.infer<typeof lowStockPayloadSchema>;
-export type YearEndPayload = z.infer<typeof yearEndPayloadSchema>;
+/** Which composer renders a kind: order messages, the install guide, account messages. */
+export type MessageFamily = "order" | "guide" | "account";
+
+export const MESSAGE_KINDS = {
+  "order-confirmation": { family: "order", payload: orderPayloadSchema },
+  "gift-receipt": { family: "order", payload: orderPayloadSchema },
+  shipped: { family: "order", payload: orderPayloadSchema },
+  delivered: { family: "order", payload: orderPayloadSchema },
+  "ready-for-pickup": { family: "order", payload: orderPayloadSchema },
+  refund: { family: "order", payload: refundPayloadSchema },
+  "payment-refunded": { family: "order", payload: paymentRefundedPayloadSchema },
+  "install-guide": { family: "guide", payload: installGuidePayloadSchema },
+  "password-reset": { family: "account", payload: passwordResetPayloadSchema },
+  "year-end-statement": { family: "account", payload: yearEndPayloadSchema },
+  "seasonal-reminder": { family: "account", payload: seasonalPayloadSchema },
+  "low-stock": { family: "account", payload: lowStockPayloadSchema },
+} as const satisfies Record<string, { family: MessageFamily; payload: z.ZodType }>;
+
+export type MessageKind = keyof typeof MESSAGE_KINDS;
+export const MESSAGE_KIND_NAMES = Object.keys(MESSAGE_KINDS) as MessageKind[];
+export type MessagePayload<K extends MessageKind> = z.output<(typeof MESSAGE_KINDS)[K]["payload"]>;
+
+export function isMessageKind(value: unknown): value is MessageKind {
+  return typeof value === "string" && Object.hasOwn(MESSAGE_KINDS, value);
+}
+
+/** One message to queue, typed by its kind: the payload must be that kind's. */
+export type OutboxMessageInput = {
+  [K in MessageKind]: {
+    /** One message per cause, e.g. `order-confirmation:<orderId>`; a second enqueue with the same key is ignored. */
+    dedupeKey: string;
+    kind: K;
+    to: string;
+    subject: string;
+    payload: z.input<(typeof MESSAGE_KINDS)[K]["payload"]>;
+  };
+}[MessageKind];
+
+export type PasswordResetPayload = MessagePayload<"password-reset">;
+export type SeasonalPayload = MessagePayload<"seasonal-reminder">;
+export type LowStockPayload = MessagePayload<"low-stock">;
+export type YearEndPayload = MessagePayload<"year-end-statement">;
 
 /** A message that no retry will fix (unknown kind, malformed payload, missing record). */
 export class PermanentMailError extends Error {
   override name = "PermanentMailError";
+}
+
+/** A message refused at the door: its kind is not in MESSAGE_KINDS, or its payload or envelope is malformed. */
+export class InvalidMessageError extends Error {
+  override name = "InvalidMessageError";
+}
+
+const envelopeSchema = z.object({
+  dedupeKey: z.string().trim().min(1, "A message needs a dedupe key."),
+  to: z.string().trim().min(3).includes("@", { message: "A message needs an address to go to." }),
+  subject: z.string().trim().min(1, "A message needs a subject."),
+});
+
+function firstIssue(error: z.ZodError): string {
+  const issue = error.issues[0];
+  if (!issue) return "invalid";
+  return issue.path.length ? `${issue.path.join(".")}: ${issue.message}` : issue.message;
+}
+
+/**
+ * Checks a message before it is queued and returns its payload as the sender will read it
+ * (defaults filled in, unknown keys dropped). Throws InvalidMessageError, so a bad message fails
+ * the transaction that tried to queue it instead of waiting in the outbox as "failed".
+ */
+export function validateMessage(message: { dedupeKey: string; kind: string; to: string; subject: string; payload: unknown }): {
+  kind: MessageKind;
+  payload: Record<string, unknown>;
+} {
+  if (!isMessageKind(message.kind)) {
+    throw new InvalidMessageError(`There is no message kind "${message.kind}"; add it to MESSAGE_KINDS (lib/mail/payloads.ts) first.`);
+  }
+  const envelope = envelopeSchema.safeParse(message);
+  if (!envelope.success) throw new InvalidMessageError(`The ${message.kind} message: ${firstIssue(envelope.error)}.`);
+  const parsed = MESSAGE_KINDS[message.kind].payload.safeParse(message.payload);
+  if (!parsed.success) {
+    throw new InvalidMessageError(`The ${message.kind} message's payload is malformed: ${firstIssue(parsed.error)}.`);
+  }
+  return { kind: message.kind, payload: parsed.data as Record<string, unknown> };
 }
 
 export function parsePayload<S extends z.ZodType>({

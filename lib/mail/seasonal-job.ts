@@ -3,7 +3,7 @@ import { count, eq, like } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { emailPreferences, outbox, users } from "@/db/schema";
 import { getUpkeepSeason } from "./upkeep-calendar";
-import { enqueueEmail } from "./outbox";
+import { enqueueEmail } from "./commands/outbox";
 import { findDueReminder, type DueReminder } from "./seasons";
 
 /**

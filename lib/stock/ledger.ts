@@ -3,7 +3,7 @@ import type { DbOrTx } from "@/db/client";
 import { houseModels, stockMovements } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
 import { crossesLowStock } from "@/lib/mail/low-stock";
-import { queueLowStockAlert } from "@/lib/mail/low-stock-alert";
+import { queueLowStockAlert } from "@/lib/mail/commands/low-stock-alert";
 
 export type StockMovementKind = "received" | "adjusted" | "reserved" | "sold" | "released";
 

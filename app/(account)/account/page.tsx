@@ -9,8 +9,8 @@ import { ButtonLink } from "@/components/ui/button";
 import { requirePageUser } from "@/lib/auth/guard";
 import { ROLE_LABELS } from "@/lib/auth/roles";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
-import { listOrdersForUser } from "@/lib/checkout/order-queries";
-import { statusTone, statusWords } from "@/lib/checkout/order-status";
+import { listOrdersForUser } from "@/lib/orders/queries";
+import { statusTone, statusWords } from "@/lib/orders/statuses";
 import { formatUsd } from "@/lib/checkout/money";
 
 export const metadata: Metadata = { title: "My account" };

@@ -3,7 +3,7 @@ import { ResetPasswordForm } from "@/components/account/reset-password-form";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
-import { checkResetToken } from "@/lib/mail/password-reset";
+import { checkResetToken } from "@/lib/mail/queries/password-reset";
 
 // The token is in the URL: keep it out of Referer headers and out of search engines.
 export const metadata: Metadata = {

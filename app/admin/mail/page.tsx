@@ -12,7 +12,7 @@ import {
   listOutboxMessages,
   OUTBOX_FILTERS,
   type OutboxFilter,
-} from "@/lib/mail/admin-queries";
+} from "@/lib/mail/queries/outbox";
 
 export const metadata: Metadata = { title: "Mail" };
 

@@ -1,5 +1,5 @@
 import { getSessionUser } from "@/lib/auth/session";
-import { startCheckout } from "@/lib/checkout/orders";
+import { startCheckout } from "@/lib/checkout/commands/orders";
 import { checkoutRequestSchema } from "@/lib/checkout/schemas";
 import { parseJson, route } from "@/lib/http/route";
 

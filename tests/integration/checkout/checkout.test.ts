@@ -1,11 +1,11 @@
 import { and, count, eq } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { getDb } from "@/db/client";
-import { orders, refunds, stockMovements } from "@/db/schema";
+import { orders, outbox, refunds, stockMovements } from "@/db/schema";
 import { seedDemo } from "@/lib/demo/commands";
 import { POST as quotePost } from "@/app/api/cart/quote/route";
 import { POST as checkoutPost } from "@/app/api/checkout/route";
-import { expireStaleReservations, RESERVATION_MS } from "@/lib/checkout/orders";
+import { expireStaleReservations, RESERVATION_MS } from "@/lib/checkout/commands/orders";
 import { getPayments } from "@/lib/checkout/payments";
 import { resetDb } from "../../support/db";
 import { startTestPayments } from "../../support/payments";
@@ -135,21 +135,28 @@ describe("quote and checkout", () => {
     expect(released[0]!.n).toBe(1);
   });
 
-  it("a payment for an expired reservation whose stock is gone is refunded, never oversold", async () => {
+  it("a payment for an expired reservation is refunded, never taken: the order stays expired and nothing is oversold", async () => {
     const now = new Date();
     const { orderId } = await startCheckout(checkoutInput({ items: [{ slug: "ember-five", quantity: 2 }] }), null, now);
     const order = await orderRow(orderId);
     // The reservation lapses (stock comes back) without cancelling the intent, then another buyer takes the stock.
-    const { expireOrder } = await import("@/lib/checkout/orders");
+    const { expireOrder } = await import("@/lib/checkout/commands/orders");
     await expireOrder(orderId, "test: lapsed");
     await setStock("ember-five", 0);
     await getPayments().paymentIntents.confirm(order.paymentIntentId!, { payment_method: "pm_card_visa" });
     await payments.standIn.webhooksIdle();
     const after = await orderRow(orderId);
-    expect(after.status).toBe("refunded");
-    expect(after.refundedCents).toBe(after.totalCents);
+    expect(after).toMatchObject({ status: "expired", paidAt: null, refundedCents: 0 });
     expect(await stockOf("ember-five")).toBe(0);
     const db = await getDb();
-    expect((await db.select().from(refunds).where(eq(refunds.orderId, orderId)))).toHaveLength(1);
+    const recorded = await db.select().from(refunds).where(eq(refunds.orderId, orderId));
+    expect(recorded).toHaveLength(1);
+    expect(recorded[0]).toMatchObject({ status: "succeeded", cause: "automatic", amountCents: order.totalCents });
+    // The money is back with the buyer, once, and the buyer is told.
+    const intent = await getPayments().paymentIntents.retrieve(order.paymentIntentId!);
+    const charge = await getPayments().charges.retrieve(intent.latest_charge as string);
+    expect(charge.amount_refunded).toBe(order.totalCents);
+    const [mail] = await db.select().from(outbox).where(eq(outbox.dedupeKey, `payment-refunded:${orderId}`));
+    expect(mail).toMatchObject({ kind: "payment-refunded", payload: { orderId, amountCents: order.totalCents } });
   });
 });

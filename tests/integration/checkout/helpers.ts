@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { houseModels, orders } from "@/db/schema";
 import { getPayments } from "@/lib/checkout/payments";
-import { startCheckout } from "@/lib/checkout/orders";
+import { startCheckout } from "@/lib/checkout/commands/orders";
 import type { CheckoutRequest } from "@/lib/checkout/schemas";
 
 export const guest = { name: "Marisol Fenwick", email: "marisol@example.org" };

@@ -1,7 +1,8 @@
 import { and, count, eq } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
-import { gifts, outbox, stockMovements, webhookEvents } from "@/db/schema";
+import { gifts, orders, outbox, refunds, stockMovements, webhookEvents } from "@/db/schema";
 import { seedDemo } from "@/lib/demo/commands";
+import { expireOrder } from "@/lib/checkout/commands/orders";
 import { getPayments } from "@/lib/checkout/payments";
 import { resetDb } from "../../support/db";
 import { deliver, signPayload, startTestPayments } from "../../support/payments";
@@ -143,5 +144,60 @@ describe("payment webhooks", () => {
     const res = await deliver(body, signPayload(body));
     expect(res.status).toBe(503);
     expect(await countRows(webhookEvents)).toBe(0);
+  });
+
+  it("a payment for an expired checkout is refused by the state machine, answered 200, and refunded once", async () => {
+    const before = await stockOf("twin-ridge");
+    const { orderId } = await startCheckout(checkoutInput({ items: [{ slug: "twin-ridge", quantity: 1 }] }), null);
+    expect(await expireOrder(orderId, "test: the 30 minutes ran out")).toBe(true);
+    const expired = await orderRow(orderId);
+    expect(await stockOf("twin-ridge")).toBe(before);
+    // The buyer's card goes through after all (the houses are still on the shelf).
+    await getPayments().paymentIntents.confirm(expired.paymentIntentId!, { payment_method: "pm_card_visa" });
+    await payments.standIn.webhooksIdle();
+    const after = await orderRow(orderId);
+    expect(after).toMatchObject({ status: "expired", paidAt: null, refundedCents: 0, stockHeld: false });
+    expect(await stockOf("twin-ridge")).toBe(before);
+    const db = await resetDbless();
+    const events = await db.select().from(webhookEvents).where(eq(webhookEvents.type, "payment_intent.succeeded"));
+    expect(events.map((e) => e.outcome)).toEqual(["refunded-late-payment"]);
+    // A second delivery of a success for the same payment (another event id) refunds nothing more.
+    const again = await eventFor(orderId, "payment_intent.succeeded", "evt_late_again");
+    const res = await deliver(again, signPayload(again));
+    expect(res.status).toBe(200);
+    const rows = await db.select().from(refunds).where(eq(refunds.orderId, orderId));
+    expect(rows).toHaveLength(1);
+    expect(rows[0]).toMatchObject({ status: "succeeded", cause: "automatic", amountCents: expired.totalCents, idempotencyKey: `auto-refund-${orderId}` });
+    const intent = await getPayments().paymentIntents.retrieve(expired.paymentIntentId!);
+    const charge = await getPayments().charges.retrieve(intent.latest_charge as string);
+    expect(charge.amount_refunded).toBe(expired.totalCents);
+    expect(charge.refunds?.data).toHaveLength(1);
+    const mail = (await db.select().from(outbox)).filter((m) => (m.payload as { orderId?: string }).orderId === orderId);
+    expect(mail.map((m) => m.kind)).toEqual(["payment-refunded"]);
+    expect(await db.select().from(gifts).where(eq(gifts.orderId, orderId))).toEqual([]);
+  });
+
+  it("a payment event for a refunded order is refused, answered 200, and changes nothing but the event's record", async () => {
+    const { orderId } = await startCheckout(checkoutInput({ giftCents: 1000 }), null);
+    await pay(orderId);
+    await payments.standIn.webhooksIdle();
+    const db = await resetDbless();
+    // The order has since been refunded in full (set here directly: the test is about the webhook).
+    await db.update(orders).set({ status: "refunded" }).where(eq(orders.id, orderId));
+    const refunded = await orderRow(orderId);
+    const mailBefore = await countRows(outbox);
+    const body = await eventFor(orderId, "payment_intent.succeeded", "evt_for_refunded");
+    const res = await deliver(body, signPayload(body));
+    expect(res.status).toBe(200);
+    expect(await res.json()).toMatchObject({ received: true, duplicate: false, outcome: "refused: order is refunded (final_state)" });
+    expect(await orderRow(orderId)).toEqual(refunded);
+    const [recorded] = await db.select().from(webhookEvents).where(eq(webhookEvents.id, "evt_for_refunded"));
+    expect(recorded?.processedAt).toBeInstanceOf(Date);
+    expect(await countRows(outbox)).toBe(mailBefore);
+    expect(await db.select().from(refunds).where(eq(refunds.orderId, orderId))).toEqual([]);
+    const intent = await getPayments().paymentIntents.retrieve(refunded.paymentIntentId!);
+    expect((await getPayments().charges.retrieve(intent.latest_charge as string)).amount_refunded).toBe(0);
+    // The provider's retry of the same event finds it recorded and does nothing.
+    expect(await (await deliver(body, signPayload(body))).json()).toMatchObject({ duplicate: true });
   });
 });

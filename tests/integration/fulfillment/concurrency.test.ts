@@ -3,7 +3,7 @@ import { seedDemo } from "@/lib/demo/commands";
 import type { SessionUser } from "@/lib/auth/session";
 import { POST as shipPost } from "@/app/api/fulfillment/orders/[id]/boxes/[boxId]/ship/route";
 import { POST as transitionPost } from "@/app/api/fulfillment/orders/[id]/transition/route";
-import { packOrder } from "@/lib/fulfillment/transitions";
+import { packOrder } from "@/lib/fulfillment/commands/transitions";
 import { resetDb } from "../../support/db";
 import { boxesOf, demoUser, eventsOf, insertPaidOrder, orderById, outboxFor, UPS_NUMBER, USPS_NUMBER } from "./support";
 

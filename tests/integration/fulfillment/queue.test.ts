@@ -3,7 +3,7 @@ import { seedDemo } from "@/lib/demo/commands";
 import type { SessionUser } from "@/lib/auth/session";
 import { GET as csvGet } from "@/app/api/fulfillment/orders.csv/route";
 import { GET as queueGet } from "@/app/api/fulfillment/orders/route";
-import { summarizeQueue } from "@/lib/fulfillment/queue";
+import { summarizeQueue } from "@/lib/fulfillment/queries/queue";
 import { resetDb } from "../../support/db";
 import { demoUser, insertPaidOrder } from "./support";
 

@@ -7,7 +7,7 @@ import type { SessionUser } from "@/lib/auth/session";
 import { POST as cancelPost } from "@/app/api/fulfillment/orders/[id]/cancel/route";
 import { POST as refundPost } from "@/app/api/fulfillment/orders/[id]/refund/route";
 import { getPayments } from "@/lib/checkout/payments";
-import { packOrder, shipBox, transitionOrder } from "@/lib/fulfillment/transitions";
+import { packOrder, shipBox, transitionOrder } from "@/lib/fulfillment/commands/transitions";
 import { resetDb } from "../../support/db";
 import { startTestPayments } from "../../support/payments";
 import { boxesOf, checkoutPaidOrder, demoUser, orderById, outboxFor, UPS_NUMBER } from "./support";
@@ -15,7 +15,9 @@ import { boxesOf, checkoutPaidOrder, demoUser, orderById, outboxFor, UPS_NUMBER 
 // Admin money buttons: cancel an unshipped order (refund in full through the payments SDK, stock
 // back through the ledger) and refund a shipped one without taking stock back.
 vi.hoisted(() => {
-  process.env.STRIPE_API_BASE = "http://localhost:12342";
+  // The suite's payments port plus 31 (12342 by default), so a run on other ports moves it too.
+  const base = new URL(process.env.STRIPE_API_BASE ?? "http://localhost:12311");
+  process.env.STRIPE_API_BASE = `http://localhost:${Number(base.port) + 31}`;
   const g = globalThis as Record<string, unknown>;
   delete g.__roostwrightEnv;
   delete g.__roostwrightStripe;
@@ -59,7 +61,7 @@ describe("cancel", () => {
     const db = await getDb();
     const recorded = await db.select().from(refunds).where(eq(refunds.orderId, order.id));
     expect(recorded).toHaveLength(1);
-    const held = await getPayments().refunds.retrieve(recorded[0]!.providerRefundId);
+    const held = await getPayments().refunds.retrieve(recorded[0]!.providerRefundId!);
     expect(held).toMatchObject({ amount: order.totalCents, payment_intent: order.paymentIntentId, status: "succeeded" });
     expect((await outboxFor(order.id)).some((m) => m.kind === "refund")).toBe(true);
   });

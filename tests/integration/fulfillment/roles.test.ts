@@ -10,7 +10,7 @@ import { GET as detailGet } from "@/app/api/fulfillment/orders/[id]/route";
 import { POST as shipPost } from "@/app/api/fulfillment/orders/[id]/boxes/[boxId]/ship/route";
 import { POST as transitionPost } from "@/app/api/fulfillment/orders/[id]/transition/route";
 import { GET as queueGet } from "@/app/api/fulfillment/orders/route";
-import { packOrder, shipBox, transitionOrder } from "@/lib/fulfillment/transitions";
+import { packOrder, shipBox, transitionOrder } from "@/lib/fulfillment/commands/transitions";
 import { resetDb } from "../../support/db";
 import { startTestPayments } from "../../support/payments";
 import { boxesOf, checkoutPaidOrder, demoUser, insertPaidOrder, orderById, UPS_NUMBER } from "./support";
@@ -21,7 +21,9 @@ import { boxesOf, checkoutPaidOrder, demoUser, insertPaidOrder, orderById, UPS_N
 
 // Our own stand-in port, so this file can run while another area's tests hold the default one.
 vi.hoisted(() => {
-  process.env.STRIPE_API_BASE = "http://localhost:12341";
+  // The suite's payments port plus 30 (12341 by default), so a run on other ports moves it too.
+  const base = new URL(process.env.STRIPE_API_BASE ?? "http://localhost:12311");
+  process.env.STRIPE_API_BASE = `http://localhost:${Number(base.port) + 30}`;
   const g = globalThis as Record<string, unknown>;
   delete g.__roostwrightEnv;
   delete g.__roostwrightStripe;

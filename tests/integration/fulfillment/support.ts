@@ -3,7 +3,7 @@ import { getDb } from "@/db/client";
 import { houseModels, orderEvents, orderLines, orders, outbox, parcels, users } from "@/db/schema";
 import type { SessionUser } from "@/lib/auth/session";
 import { billableWeightLb } from "@/lib/checkout/billable-weight";
-import { startCheckout } from "@/lib/checkout/orders";
+import { startCheckout } from "@/lib/checkout/commands/orders";
 import { getPayments } from "@/lib/checkout/payments";
 
 // Orders for the fulfillment tests. `insertPaidOrder` writes a paid order straight to the

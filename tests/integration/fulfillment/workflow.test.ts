@@ -5,7 +5,7 @@ import { POST as packPost } from "@/app/api/fulfillment/orders/[id]/pack/route";
 import { POST as shipPost } from "@/app/api/fulfillment/orders/[id]/boxes/[boxId]/ship/route";
 import { POST as transitionPost } from "@/app/api/fulfillment/orders/[id]/transition/route";
 import { GET as detailGet } from "@/app/api/fulfillment/orders/[id]/route";
-import { getBuyerParcels, getBuyerTimeline } from "@/lib/fulfillment/buyer-view";
+import { getBuyerParcels, getBuyerTimeline } from "@/lib/fulfillment/queries/buyer-view";
 import { resetDb } from "../../support/db";
 import { boxesOf, demoUser, eventsOf, insertPaidOrder, orderById, outboxFor, UPS_NUMBER, USPS_NUMBER } from "./support";
 

@@ -6,12 +6,8 @@ import { seedDemo } from "@/lib/demo/commands";
 import { DEMO_USERS } from "@/lib/demo/seed-data";
 import { verifyPassword } from "@/lib/auth/passwords";
 import { AppError } from "@/lib/http/errors";
-import {
-  checkResetToken,
-  requestPasswordReset,
-  resetPassword,
-  RESET_REQUESTS_PER_HOUR,
-} from "@/lib/mail/password-reset";
+import { requestPasswordReset, resetPassword, RESET_REQUESTS_PER_HOUR } from "@/lib/mail/commands/password-reset";
+import { checkResetToken } from "@/lib/mail/queries/password-reset";
 import { deliverPendingMail } from "@/lib/mail/sender";
 import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { OrderRow } from "@/db/schema";
-import { receiptForOrder } from "@/lib/checkout/receipt-service";
+import { receiptForOrder } from "@/lib/checkout/queries/receipt";
 
 function order(partial: Partial<OrderRow>): OrderRow {
   return {

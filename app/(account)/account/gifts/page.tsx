@@ -9,7 +9,7 @@ import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
 import { requirePageUser } from "@/lib/auth/guard";
 import { formatUsd } from "@/lib/checkout/money";
 import { yearEndStatement } from "@/lib/checkout/receipts";
-import { listGiftsForUser } from "@/lib/mail/donor-gifts";
+import { listGiftsForUser } from "@/lib/mail/queries/donor-gifts";
 import { formatMailDate } from "@/lib/mail/format";
 
 export const metadata: Metadata = { title: "Your gifts" };

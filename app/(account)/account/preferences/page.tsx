@@ -3,7 +3,7 @@ import { PreferencesForm } from "@/components/account/preferences-form";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { Card } from "@/components/ui/card";
 import { requirePageUser } from "@/lib/auth/guard";
-import { getEmailPreferences } from "@/lib/mail/preferences";
+import { getEmailPreferences } from "@/lib/mail/queries/preferences";
 import { UPKEEP_CALENDAR } from "@/lib/mail/upkeep-calendar";
 
 export const metadata: Metadata = { title: "E-mail preferences" };

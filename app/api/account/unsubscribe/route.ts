@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { parseQuery, route } from "@/lib/http/route";
 import { AppError } from "@/lib/http/errors";
 import { unsubscribeSchema } from "@/lib/mail/account-schemas";
-import { unsubscribeByToken } from "@/lib/mail/preferences";
+import { unsubscribeByToken } from "@/lib/mail/commands/preferences";
 
 export const dynamic = "force-dynamic";
 

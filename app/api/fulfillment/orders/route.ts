@@ -1,4 +1,4 @@
-import { listQueueOrders } from "@/lib/fulfillment/queue";
+import { listQueueOrders } from "@/lib/fulfillment/queries/queue";
 import { queueParamsSchema } from "@/lib/fulfillment/queue-params";
 import { queueCsvResponse } from "@/lib/fulfillment/queue-response";
 import { parseQuery, route } from "@/lib/http/route";

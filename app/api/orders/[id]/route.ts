@@ -1,7 +1,7 @@
 import { getSessionUser } from "@/lib/auth/session";
-import { getOrderForViewer } from "@/lib/checkout/order-access";
+import { getOrderForViewer } from "@/lib/checkout/queries/order-access";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
-import { getOrderHistory, getOrderLines } from "@/lib/checkout/order-queries";
+import { getOrderHistory, getOrderLines } from "@/lib/orders/queries";
 import { route } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";

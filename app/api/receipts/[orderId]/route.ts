@@ -1,6 +1,6 @@
 import { getSessionUser } from "@/lib/auth/session";
-import { getOrderForViewer } from "@/lib/checkout/order-access";
-import { getOrderReceipt } from "@/lib/checkout/receipt-service";
+import { getOrderForViewer } from "@/lib/checkout/queries/order-access";
+import { getOrderReceipt } from "@/lib/checkout/queries/receipt";
 import { AppError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 

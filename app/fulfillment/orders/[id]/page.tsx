@@ -13,9 +13,10 @@ import { ButtonLink } from "@/components/ui/button";
 import { requirePageUser } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/roles";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
-import { getFulfillmentOrder } from "@/lib/fulfillment/order-detail";
+import { getFulfillmentOrder } from "@/lib/fulfillment/queries/order-detail";
 import { boxesForLines } from "@/lib/fulfillment/packing";
-import { allowedTransitions } from "@/lib/fulfillment/states";
+import { allowedTransitions } from "@/lib/orders/state-machine";
+import { isFulfillmentState } from "@/lib/orders/statuses";
 
 export const metadata: Metadata = { title: "Order at the shipping desk" };
 
@@ -63,7 +64,7 @@ export default async function FulfillmentOrderPage({ params }: Props) {
               key={`admin-${order.version}`}
               orderId={order.id}
               version={order.version}
-              corrections={open.filter((t) => t.kind === "correction").map((t) => t.to)}
+              corrections={open.filter((t) => t.kind === "correction").map((t) => t.to).filter(isFulfillmentState)}
               canCancel={open.some((t) => t.kind === "cancel" && t.to === "cancelled")}
               canRefund={["shipped", "delivered", "picked_up"].includes(order.status)}
               remainingCents={order.totalCents - order.refundedCents}

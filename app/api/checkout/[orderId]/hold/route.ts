@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { getSessionUser } from "@/lib/auth/session";
-import { getOrderForViewer } from "@/lib/checkout/order-access";
-import { holdForPayment } from "@/lib/checkout/orders";
+import { getOrderForViewer } from "@/lib/checkout/queries/order-access";
+import { holdForPayment } from "@/lib/checkout/commands/orders";
 import { parseJson, route } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";

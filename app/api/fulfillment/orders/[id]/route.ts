@@ -1,4 +1,4 @@
-import { getFulfillmentOrder } from "@/lib/fulfillment/order-detail";
+import { getFulfillmentOrder } from "@/lib/fulfillment/queries/order-detail";
 import { AppError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 

@@ -5,8 +5,8 @@ import { PackingSlip } from "@/components/fulfillment/packing-slip";
 import { PrintButton } from "@/components/fulfillment/print-button";
 import { requirePageUser } from "@/lib/auth/guard";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
-import { getCenterDetails } from "@/lib/fulfillment/center";
-import { getFulfillmentOrder } from "@/lib/fulfillment/order-detail";
+import { getCenterDetails } from "@/lib/fulfillment/queries/center";
+import { getFulfillmentOrder } from "@/lib/fulfillment/queries/order-detail";
 
 export const metadata: Metadata = { title: "Packing slip" };
 

@@ -1,4 +1,4 @@
-import { cancelOrder } from "@/lib/fulfillment/admin-refunds";
+import { cancelOrder } from "@/lib/fulfillment/commands/admin-refunds";
 import { cancelSchema } from "@/lib/fulfillment/schemas";
 import { parseJson, route } from "@/lib/http/route";
 

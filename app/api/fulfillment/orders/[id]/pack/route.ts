@@ -1,5 +1,5 @@
 import { packSchema } from "@/lib/fulfillment/schemas";
-import { packOrder } from "@/lib/fulfillment/transitions";
+import { packOrder } from "@/lib/fulfillment/commands/transitions";
 import { parseJson, route } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";

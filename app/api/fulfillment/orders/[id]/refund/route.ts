@@ -1,4 +1,4 @@
-import { refundShippedOrder } from "@/lib/fulfillment/admin-refunds";
+import { refundShippedOrder } from "@/lib/fulfillment/commands/admin-refunds";
 import { dollarsToCents, refundSchema } from "@/lib/fulfillment/schemas";
 import { parseJson, route } from "@/lib/http/route";
 

@@ -1,5 +1,5 @@
 import { transitionSchema } from "@/lib/fulfillment/schemas";
-import { transitionOrder } from "@/lib/fulfillment/transitions";
+import { transitionOrder } from "@/lib/fulfillment/commands/transitions";
 import { parseJson, route } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";

@@ -1,5 +1,5 @@
 import { shipBoxSchema } from "@/lib/fulfillment/schemas";
-import { shipBox } from "@/lib/fulfillment/transitions";
+import { shipBox } from "@/lib/fulfillment/commands/transitions";
 import { parseJson, route } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";

@@ -1,42 +1,39 @@
 import { ROLE_LABELS, type Role } from "@/lib/auth/roles";
-import type { ShippingMethod } from "@/lib/checkout/pricing";
-import {
-  FULFILLMENT_STATE_LABELS,
-  isFulfillmentState,
-  type FulfillmentState,
-} from "./state-labels";
+import { isOrderStatus, ORDER_STATUS_LABELS, PAID_STATES, type OrderStatus, type PaidState } from "./statuses";
 
-export { FULFILLMENT_STATES, FULFILLMENT_STATE_LABELS, isFulfillmentState } from "./state-labels";
-export type { FulfillmentState } from "./state-labels";
-
-// The order fulfillment state machine. Common practice, no source: the usual order lifecycle of
-// a small shop, fitted to PRODUCT.md's roles (fulfillment packs and ships, admin cancels and
-// refunds). Parcel: paid → packing → packed → shipped → delivered. Pickup: paid → packing →
-// ready_for_pickup → picked_up. No skipping and no going back, except an admin correction, with a
-// reason, to the state just before.
+// The order state machine. Common practice, no source: the usual order lifecycle of a small
+// shop, fitted to PRODUCT.md's roles (fulfillment packs and ships, admin cancels and refunds).
+// Checkout: pending_payment → paid, or → expired when the 30-minute hold runs out. Parcel:
+// paid → packing → packed → shipped → delivered. Pickup: paid → packing → ready_for_pickup →
+// picked_up. No skipping and no going back, except an admin correction, with a reason, to the
+// state just before. Every status change goes through changeOrderStatus (lib/orders/commands.ts),
+// which asks canTransition first.
 
 /** Who moves an order: a signed-in role, or "system" (the payment webhook, a carrier update). */
 export type TransitionActor = Role | "system";
-export type TransitionKind = "advance" | "cancel" | "refund" | "correction";
+export type TransitionKind = "advance" | "expire" | "cancel" | "refund" | "correction";
+/** How the order leaves the center; "none" is a gift-only order, which is paid and nothing more. */
+export type OrderMethod = "parcel" | "pickup" | "none";
 
 export type Transition = {
-  from: FulfillmentState;
-  to: FulfillmentState;
-  methods: readonly ShippingMethod[];
+  from: OrderStatus;
+  to: OrderStatus;
+  methods: readonly OrderMethod[];
   actors: readonly TransitionActor[];
   kind: TransitionKind;
 };
 
-const BOTH: readonly ShippingMethod[] = ["parcel", "pickup"];
-const PARCEL: readonly ShippingMethod[] = ["parcel"];
-const PICKUP: readonly ShippingMethod[] = ["pickup"];
+const ANY: readonly OrderMethod[] = ["parcel", "pickup", "none"];
+const BOTH: readonly OrderMethod[] = ["parcel", "pickup"];
+const PARCEL: readonly OrderMethod[] = ["parcel"];
+const PICKUP: readonly OrderMethod[] = ["pickup"];
 const WORKERS: readonly TransitionActor[] = ["fulfillment", "admin"];
 const ADMIN: readonly TransitionActor[] = ["admin"];
 
 function edge(
-  from: FulfillmentState,
-  to: FulfillmentState,
-  methods: readonly ShippingMethod[],
+  from: OrderStatus,
+  to: OrderStatus,
+  methods: readonly OrderMethod[],
   actors: readonly TransitionActor[],
   kind: TransitionKind,
 ): Transition {
@@ -45,8 +42,10 @@ function edge(
 
 /** Every allowed transition. Anything not listed here is refused. */
 export const FULFILLMENT_TRANSITIONS: readonly Transition[] = [
-  // Only the payment processor's confirmation marks an order paid.
-  edge("pending_payment", "paid", BOTH, ["system"], "advance"),
+  // Only the payment processor's confirmation marks an order paid, and only while its checkout is
+  // open: a payment that arrives after the hold ran out is refunded, never taken.
+  edge("pending_payment", "paid", ANY, ["system"], "advance"),
+  edge("pending_payment", "expired", ANY, ["system"], "expire"),
   edge("paid", "packing", BOTH, WORKERS, "advance"),
   edge("packing", "packed", PARCEL, WORKERS, "advance"),
   edge("packed", "shipped", PARCEL, WORKERS, "advance"),
@@ -56,7 +55,7 @@ export const FULFILLMENT_TRANSITIONS: readonly Transition[] = [
   edge("ready_for_pickup", "picked_up", PICKUP, WORKERS, "advance"),
 
   // Cancel only before anything has left the building; the system may drop an unpaid checkout.
-  edge("pending_payment", "cancelled", BOTH, [...ADMIN, "system"], "cancel"),
+  edge("pending_payment", "cancelled", ANY, [...ADMIN, "system"], "cancel"),
   edge("paid", "cancelled", BOTH, ADMIN, "cancel"),
   edge("packing", "cancelled", BOTH, ADMIN, "cancel"),
   edge("packed", "cancelled", PARCEL, ADMIN, "cancel"),
@@ -94,9 +93,9 @@ export type TransitionCheck =
   { ok: true; kind: TransitionKind } | { ok: false; code: TransitionRefusal; message: string };
 
 export type TransitionRequest = {
-  from: FulfillmentState;
-  to: FulfillmentState;
-  method: ShippingMethod;
+  from: OrderStatus;
+  to: OrderStatus;
+  method: OrderMethod;
   role: TransitionActor;
   /** Required for an admin correction. */
   reason?: string;
@@ -107,8 +106,8 @@ export type TransitionRequest = {
   parcels?: { total: number; tracked: number };
 };
 
-function label(state: FulfillmentState): string {
-  return `"${FULFILLMENT_STATE_LABELS[state].label}"`;
+function label(state: OrderStatus): string {
+  return `"${ORDER_STATUS_LABELS[state].label}"`;
 }
 
 function refuse(code: TransitionRefusal, message: string): TransitionCheck {
@@ -121,8 +120,8 @@ export function allowedTransitions({
   method,
   role,
 }: {
-  from: FulfillmentState;
-  method: ShippingMethod;
+  from: OrderStatus;
+  method: OrderMethod;
   role: TransitionActor;
 }): Transition[] {
   return FULFILLMENT_TRANSITIONS.filter(
@@ -130,10 +129,16 @@ export function allowedTransitions({
   );
 }
 
+const METHOD_WORDS: Record<OrderMethod, string> = {
+  parcel: "parcel delivery",
+  pickup: "local pickup",
+  none: "gift-only",
+};
+
 /** Whether `role` may move an order from `from` to `to`; a refusal says why in words an operator can act on. */
 export function canTransition(request: TransitionRequest): TransitionCheck {
   const { from, to, method, role } = request;
-  if (!isFulfillmentState(from) || !isFulfillmentState(to))
+  if (!isOrderStatus(from) || !isOrderStatus(to))
     return refuse("unknown_state", "That is not an order state.");
   if (from === to) return refuse("same_state", `The order is already ${label(to)}.`);
   const transition = FULFILLMENT_TRANSITIONS.find(
@@ -141,7 +146,9 @@ export function canTransition(request: TransitionRequest): TransitionCheck {
   );
   if (!transition) {
     if (FULFILLMENT_TRANSITIONS.some((t) => t.from === from && t.to === to)) {
-      const other = method === "parcel" ? "local pickup" : "parcel delivery";
+      const other = FULFILLMENT_TRANSITIONS.find((t) => t.from === from && t.to === to)!
+        .methods.map((m) => METHOD_WORDS[m])
+        .join(" or ");
       return refuse(
         "wrong_method",
         `Only ${other} orders can go from ${label(from)} to ${label(to)}.`,
@@ -191,3 +198,16 @@ export function canTransition(request: TransitionRequest): TransitionCheck {
   }
   return { ok: true, kind: transition.kind };
 }
+
+/** An admin's step back (the buyer's timeline says so plainly). */
+export function isCorrection(from: string | null, to: string): boolean {
+  return FULFILLMENT_TRANSITIONS.some((t) => t.from === from && t.to === to && t.kind === "correction");
+}
+
+/**
+ * States where a volunteer still has a next step: the shipping desk's "open" view. Derived from
+ * the table, so a new step shows up in the queue without a second list.
+ */
+export const OPEN_STATES: readonly PaidState[] = PAID_STATES.filter((state) =>
+  FULFILLMENT_TRANSITIONS.some((t) => t.from === state && t.kind === "advance" && t.actors.includes("fulfillment")),
+);

@@ -1,10 +1,10 @@
 import "server-only";
-import { isUuid } from "./ids";
+import { isUuid } from "../ids";
 import { asc, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { houseModels, orderEvents, orderLines, orders, parcels, users, type OrderRow, type ParcelRow } from "@/db/schema";
 import { billableWeightLb, type BillableWeight } from "@/lib/checkout/billable-weight";
-import type { FulfillmentState } from "./state-labels";
+import type { FulfillmentState } from "@/lib/orders/statuses";
 
 // Everything the order's fulfillment page shows: the order, its houses with their cartons and
 // billable weights, its boxes, and who moved it when.

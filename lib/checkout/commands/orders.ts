@@ -1,14 +1,16 @@
 import "server-only";
 import { randomBytes } from "node:crypto";
-import { and, eq, lt } from "drizzle-orm";
+import { and, eq, lt, sql } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db/client";
-import { orderEvents, orderLines, orders, sites, type OrderRow } from "@/db/schema";
+import { orderLines, orders, sites, type OrderRow } from "@/db/schema";
 import type { SessionUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/http/errors";
+import { changeOrderStatus, openOrder, SYSTEM_ACTOR, type NewOrderValues } from "@/lib/orders/commands";
+import { StaleOrderError } from "@/lib/orders/refusals";
 import { moveStock } from "@/lib/stock/ledger";
-import { getPayments } from "./payments";
-import { quoteFromDatabase } from "./quote-service";
-import type { CheckoutRequest } from "./schemas";
+import { getPayments } from "../payments";
+import { quoteFromDatabase } from "../queries/quote";
+import type { CheckoutRequest } from "../schemas";
 
 // An unpaid reservation holds stock for 30 minutes (the issue's rule; common practice for carts).
 export const RESERVATION_MS = 30 * 60 * 1000;
@@ -52,27 +54,23 @@ export async function startCheckout(input: CheckoutRequest, user: SessionUser | 
       giftCents: input.giftCents,
     });
     const siteId = await resolveSiteId(tx, input, user);
-    const [row] = await tx
-      .insert(orders)
-      .values({
-        userId: user?.id ?? null,
-        email: input.contact.email,
-        name: input.contact.name,
-        accessToken: randomBytes(24).toString("base64url"),
-        status: "pending_payment",
-        method: input.items.length === 0 ? "none" : input.method,
-        shipTo: input.items.length > 0 && input.method === "parcel" ? input.address : null,
-        subtotalCents: quote.subtotalCents,
-        shippingCents: quote.shipping.cents,
-        taxCents: quote.taxCents,
-        giftCents: quote.giftCents,
-        totalCents: quote.totalCents,
-        reservedUntil: new Date(now.getTime() + RESERVATION_MS),
-        stockHeld: input.items.length > 0,
-        siteId,
-      })
-      .returning();
-    if (!row) throw new Error("order insert returned nothing");
+    const values: NewOrderValues = {
+      userId: user?.id ?? null,
+      email: input.contact.email,
+      name: input.contact.name,
+      accessToken: randomBytes(24).toString("base64url"),
+      method: input.items.length === 0 ? "none" : input.method,
+      shipTo: input.items.length > 0 && input.method === "parcel" ? input.address : null,
+      subtotalCents: quote.subtotalCents,
+      shippingCents: quote.shipping.cents,
+      taxCents: quote.taxCents,
+      giftCents: quote.giftCents,
+      totalCents: quote.totalCents,
+      reservedUntil: new Date(now.getTime() + RESERVATION_MS),
+      stockHeld: input.items.length > 0,
+      siteId,
+    };
+    const row = await openOrder(tx, { values, actor: { id: user?.id ?? null, role: user?.role ?? "customer" }, note: "Checkout started" });
     if (quote.lines.length > 0) {
       await tx.insert(orderLines).values(
         quote.lines.map((line, i) => ({
@@ -87,7 +85,6 @@ export async function startCheckout(input: CheckoutRequest, user: SessionUser | 
       );
       await holdLines(tx, row, user?.id ?? null, "Held for checkout");
     }
-    await tx.insert(orderEvents).values({ orderId: row.id, fromStatus: null, toStatus: "pending_payment", actorId: user?.id ?? null, note: "Checkout started" });
     return row;
   });
 
@@ -121,46 +118,56 @@ export async function holdForPayment(order: OrderRow, now = new Date()): Promise
   const db = await getDb();
   return db.transaction(async (tx) => {
     const reservedUntil = new Date(now.getTime() + RESERVATION_MS);
+    // Each write bumps the version, so a reservation sweeper that read the order before this
+    // extension loses its conditional update instead of expiring an order being paid.
     const [claimed] = await tx
       .update(orders)
-      .set({ stockHeld: true, reservedUntil })
+      .set({ stockHeld: true, reservedUntil, version: sql`${orders.version} + 1` })
       .where(and(eq(orders.id, order.id), eq(orders.status, "pending_payment"), eq(orders.stockHeld, false)))
       .returning();
     if (claimed) {
       await holdLines(tx, claimed, null, "Held again for another payment attempt");
       return claimed;
     }
-    const [row] = await tx.update(orders).set({ reservedUntil }).where(and(eq(orders.id, order.id), eq(orders.status, "pending_payment"))).returning();
+    const [row] = await tx
+      .update(orders)
+      .set({ reservedUntil, version: sql`${orders.version} + 1` })
+      .where(and(eq(orders.id, order.id), eq(orders.status, "pending_payment")))
+      .returning();
     if (!row) throw new AppError("conflict", "This order can no longer be paid.");
     return row;
   });
 }
 
-/** Marks one unpaid order expired, giving its stock back exactly once (the status update is the claim). */
-export async function expireOrder(orderId: string, note: string): Promise<boolean> {
+/**
+ * Closes one unpaid checkout (pending_payment → expired through changeOrderStatus) and gives its
+ * stock back exactly once: the status change is the claim, so of two sweepers only one writes.
+ */
+export async function expireOrder(orderId: string, note: string, { heldBefore }: { heldBefore?: Date } = {}): Promise<boolean> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
-    const [withStock] = await tx
-      .update(orders)
-      .set({ status: "expired", stockHeld: false })
-      .where(and(eq(orders.id, orderId), eq(orders.status, "pending_payment"), eq(orders.stockHeld, true)))
-      .returning({ id: orders.id });
-    if (withStock) {
-      await releaseLines(tx, orderId, "Reservation expired");
-    } else {
-      const [without] = await tx
-        .update(orders)
-        .set({ status: "expired" })
-        .where(and(eq(orders.id, orderId), eq(orders.status, "pending_payment")))
-        .returning({ id: orders.id });
-      if (!without) return false;
-    }
-    await tx.insert(orderEvents).values({ orderId, fromStatus: "pending_payment", toStatus: "expired", note });
-    return true;
-  });
+  try {
+    return await db.transaction(async (tx) => {
+      const [order] = await tx.select().from(orders).where(eq(orders.id, orderId));
+      if (!order || order.status !== "pending_payment") return false;
+      // A new payment attempt may have extended the hold since the sweeper looked.
+      if (heldBefore && order.reservedUntil && order.reservedUntil >= heldBefore) return false;
+      await changeOrderStatus(tx, { order, to: "expired", actor: SYSTEM_ACTOR, note, set: { stockHeld: false } });
+      if (order.stockHeld) await releaseLines(tx, orderId, "Reservation expired");
+      return true;
+    });
+  } catch (error) {
+    // Another writer (a second sweeper, a payment, a new attempt) changed the order first.
+    if (error instanceof StaleOrderError) return false;
+    throw error;
+  }
 }
 
-/** Expires every reservation older than 30 minutes and cancels its PaymentIntent. */
+/**
+ * Expires every reservation older than 30 minutes, then, after that commit and never inside it,
+ * cancels its PaymentIntent under one idempotency key per order. If the process dies between the
+ * two, the intent stays open: a payment on it reaches the webhook for an expired order and is
+ * refunded, so no money is kept for an order that cannot be paid.
+ */
 export async function expireStaleReservations(now = new Date()): Promise<number> {
   const db = await getDb();
   const stale = await db
@@ -169,13 +176,13 @@ export async function expireStaleReservations(now = new Date()): Promise<number>
     .where(and(eq(orders.status, "pending_payment"), lt(orders.reservedUntil, now)));
   let expired = 0;
   for (const o of stale) {
-    if (!(await expireOrder(o.id, "Unpaid for 30 minutes; stock returned"))) continue;
+    if (!(await expireOrder(o.id, "Unpaid for 30 minutes; stock returned", { heldBefore: now }))) continue;
     expired++;
     if (o.paymentIntentId) {
       try {
         await getPayments().paymentIntents.cancel(o.paymentIntentId, {}, { idempotencyKey: `expire-${o.id}` });
       } catch (error) {
-        // Already succeeded or cancelled: the webhook settles it (a late payment is refunded if stock is gone).
+        // Already succeeded or cancelled: the webhook settles it (a late payment is refunded).
         console.warn(`cancelling PaymentIntent ${o.paymentIntentId} failed`, (error as Error).message);
       }
     }

@@ -1,32 +1,34 @@
 import { describe, expect, it } from "vitest";
-import type { ShippingMethod } from "@/lib/checkout/pricing";
 import {
   allowedTransitions,
   canTransition,
-  FULFILLMENT_STATE_LABELS,
-  FULFILLMENT_STATES,
   FULFILLMENT_TRANSITIONS,
-  type FulfillmentState,
+  isCorrection,
+  OPEN_STATES,
+  type OrderMethod,
   type TransitionActor,
-} from "@/lib/fulfillment/states";
+} from "@/lib/orders/state-machine";
+import { ORDER_STATUS_LABELS, ORDER_STATUSES, type OrderStatus } from "@/lib/orders/statuses";
 
 // Common practice, no source: the order lifecycle in the brief. The matrix below is the spec,
 // written out by hand; the code's table must equal it and canTransition must follow it for every
-// (from, to, method, actor) combination: 10 × 10 × 2 × 5 = 1,000 cases.
+// (from, to, method, actor) combination: 11 × 11 × 3 × 5 = 1,815 cases.
 
-const METHODS: ShippingMethod[] = ["parcel", "pickup"];
+const METHODS: OrderMethod[] = ["parcel", "pickup", "none"];
+const METHOD_CODES: Record<OrderMethod, string> = { parcel: "P", pickup: "K", none: "N" };
 const ACTORS: TransitionActor[] = ["system", "customer", "staff", "fulfillment", "admin"];
 
-// from → to | methods (P parcel, K pickup) | actors (S system, F fulfillment, A admin) | kind
+// from → to | methods (P parcel, K pickup, N gift only) | actors (S system, F fulfillment, A admin) | kind
 const SPEC = `
-pending_payment  paid              PK  S    advance
+pending_payment  paid              PKN S    advance
+pending_payment  expired           PKN S    expire
 paid             packing           PK  FA   advance
 packing          packed            P   FA   advance
 packed           shipped           P   FA   advance
 shipped          delivered         P   FAS  advance
 packing          ready_for_pickup  K   FA   advance
 ready_for_pickup picked_up         K   FA   advance
-pending_payment  cancelled         PK  AS   cancel
+pending_payment  cancelled         PKN AS   cancel
 paid             cancelled         PK  A    cancel
 packing          cancelled         PK  A    cancel
 packed           cancelled         P   A    cancel
@@ -46,7 +48,7 @@ picked_up        ready_for_pickup  K   A    correction
 type SpecRow = {
   from: string;
   to: string;
-  methods: ShippingMethod[];
+  methods: OrderMethod[];
   actors: TransitionActor[];
   kind: string;
 };
@@ -59,16 +61,16 @@ const spec: SpecRow[] = SPEC.trim()
     return {
       from,
       to,
-      methods: METHODS.filter((method) => methods.includes(method === "parcel" ? "P" : "K")),
+      methods: METHODS.filter((method) => methods.includes(METHOD_CODES[method])),
       actors: [...actors].map((code) => ACTOR_CODES[code] as TransitionActor),
       kind,
     };
   });
 
 function specFor(
-  from: FulfillmentState,
-  to: FulfillmentState,
-  method: ShippingMethod,
+  from: OrderStatus,
+  to: OrderStatus,
+  method: OrderMethod,
 ): SpecRow | undefined {
   return spec.find((row) => row.from === from && row.to === to && row.methods.includes(method));
 }
@@ -88,30 +90,37 @@ describe("the transition table", () => {
       .map((row) => ({ ...row, methods: [...row.methods].sort(), actors: [...row.actors].sort() }))
       .sort((a, b) => sortKey(a).localeCompare(sortKey(b)));
     expect(table).toEqual(expected);
-    expect(FULFILLMENT_TRANSITIONS).toHaveLength(22);
+    expect(FULFILLMENT_TRANSITIONS).toHaveLength(23);
   });
 
   it("gives every state its own label and buyer note", () => {
-    const labels = FULFILLMENT_STATES.map((state) => FULFILLMENT_STATE_LABELS[state].label);
-    expect(new Set(labels).size).toBe(FULFILLMENT_STATES.length);
-    for (const state of FULFILLMENT_STATES)
-      expect(FULFILLMENT_STATE_LABELS[state].buyerNote.length).toBeGreaterThan(10);
+    const labels = ORDER_STATUSES.map((state) => ORDER_STATUS_LABELS[state].label);
+    expect(new Set(labels).size).toBe(ORDER_STATUSES.length);
+    for (const state of ORDER_STATUSES)
+      expect(ORDER_STATUS_LABELS[state].buyerNote.length).toBeGreaterThan(10);
+  });
+
+  it("derives the desk's open states and the timeline's step backs from the table", () => {
+    expect(OPEN_STATES).toEqual(["paid", "packing", "packed", "shipped", "ready_for_pickup"]);
+    expect(isCorrection("shipped", "packed")).toBe(true);
+    expect(isCorrection("packed", "shipped")).toBe(false);
+    expect(isCorrection(null, "pending_payment")).toBe(false);
   });
 });
 
 describe("canTransition over the full matrix", () => {
-  const cases = FULFILLMENT_STATES.flatMap((from) =>
-    FULFILLMENT_STATES.flatMap((to) =>
+  const cases = ORDER_STATUSES.flatMap((from) =>
+    ORDER_STATUSES.flatMap((to) =>
       METHODS.flatMap((method) => ACTORS.map((role) => ({ from, to, method, role }))),
     ),
   );
 
-  it("covers 1,000 combinations, 39 of them allowed", () => {
-    expect(cases).toHaveLength(1_000);
+  it("covers 1,815 combinations, 45 of them allowed", () => {
+    expect(cases).toHaveLength(1_815);
     const allowed = cases.filter(({ from, to, method, role }) =>
       specFor(from, to, method)?.actors.includes(role),
     );
-    expect(allowed).toHaveLength(39);
+    expect(allowed).toHaveLength(45);
   });
 
   it.each(cases)("$from → $to ($method, $role)", ({ from, to, method, role }) => {
@@ -147,7 +156,7 @@ describe("canTransition over the full matrix", () => {
 
 describe("canTransition: guards and messages", () => {
   it("walks the parcel path and the pickup path one step at a time", () => {
-    const parcel: FulfillmentState[] = [
+    const parcel: OrderStatus[] = [
       "pending_payment",
       "paid",
       "packing",
@@ -155,7 +164,7 @@ describe("canTransition: guards and messages", () => {
       "shipped",
       "delivered",
     ];
-    const pickup: FulfillmentState[] = [
+    const pickup: OrderStatus[] = [
       "pending_payment",
       "paid",
       "packing",
@@ -167,7 +176,7 @@ describe("canTransition: guards and messages", () => {
       ["pickup", pickup],
     ] as const) {
       path.slice(1).forEach((to, index) => {
-        const from = path[index] as FulfillmentState;
+        const from = path[index] as OrderStatus;
         const role = from === "pending_payment" ? "system" : "fulfillment";
         expect(
           canTransition({ from, to, method, role, parcels: { total: 2, tracked: 2 } }),
@@ -268,8 +277,21 @@ describe("canTransition: guards and messages", () => {
     expect(
       canTransition({ from: "refunded", to: "paid", method: "pickup", role: "admin" }),
     ).toMatchObject({ code: "final_state" });
+    // A payment that arrives after the checkout closed, or for a refunded order, is never taken.
+    expect(canTransition({ from: "expired", to: "paid", method: "parcel", role: "system" })).toEqual({
+      ok: false,
+      code: "final_state",
+      message: 'A "Checkout expired" order can\'t change any more.',
+    });
+    expect(canTransition({ from: "refunded", to: "paid", method: "none", role: "system" })).toMatchObject({ ok: false, code: "final_state" });
+    expect(canTransition({ from: "paid", to: "paid", method: "parcel", role: "system" })).toMatchObject({ ok: false, code: "same_state" });
+    expect(canTransition({ from: "pending_payment", to: "expired", method: "none", role: "admin" })).toMatchObject({
+      ok: false,
+      code: "role_not_allowed",
+      message: 'Only the payment system can move an order from "Awaiting payment" to "Checkout expired".',
+    });
     // A state name from outside TypeScript's reach (a form post), hence the cast.
-    const posted = "lost" as FulfillmentState;
+    const posted = "lost" as OrderStatus;
     expect(
       canTransition({ from: posted, to: "paid", method: "parcel", role: "admin" }),
     ).toMatchObject({ code: "unknown_state" });

@@ -1,13 +1,13 @@
 import { describe, expect, it } from "vitest";
-import { messagesForArrival } from "@/lib/fulfillment/messages";
-import { refusalError } from "@/lib/fulfillment/refusals";
-import { canTransition } from "@/lib/fulfillment/states";
+import { messagesForArrival, messagesForChange } from "@/lib/orders/messages";
+import { refusalError } from "@/lib/orders/refusals";
+import { canTransition } from "@/lib/orders/state-machine";
 import { buyerTimeline } from "@/lib/fulfillment/timeline";
 
 // Common practice, no source: a shop mails the buyer when the parcel leaves, when it arrives and
-// when a pickup is ready; the dedupe keys are the outbox contract (lib/mail/outbox.ts).
+// when a pickup is ready; the dedupe keys are the outbox contract (lib/mail/commands/outbox.ts).
 
-const order = { id: "0b0c5a3e-0000-4000-8000-000000000001", number: 42, email: "wren@example.org" };
+const order = { id: "0b0c5a3e-0000-4000-8000-000000000001", number: 42, email: "wren@example.org", method: "parcel", giftCents: 0 };
 
 describe("e-mails on arrival in a state", () => {
   it("queues the shipped, delivered (+ install guide) and ready-for-pickup messages, one key each", () => {
@@ -23,6 +23,24 @@ describe("e-mails on arrival in a state", () => {
 
   it("sends nothing for the bench steps", () => {
     for (const to of ["packing", "packed", "picked_up", "cancelled"] as const) expect(messagesForArrival({ order, to })).toEqual([]);
+  });
+
+  it("confirms a payment with the install guide, and the gift receipt when there is a gift", () => {
+    expect(messagesForArrival({ order, to: "paid" }).map((m) => [m.kind, m.dedupeKey, m.subject])).toEqual([
+      ["order-confirmation", `order-confirmation:${order.id}`, "Your order RW-00042 is confirmed"],
+      ["install-guide", `install-guide:paid:${order.id}`, "Your install guide for order RW-00042"],
+    ]);
+    const giftOnly = { ...order, method: "none", giftCents: 2500 };
+    expect(messagesForArrival({ order: giftOnly, to: "paid" }).map((m) => [m.kind, m.subject])).toEqual([
+      ["order-confirmation", "Thank you for your gift (RW-00042)"],
+      ["gift-receipt", "Your gift receipt from Cedar Hollow Wildlife Rescue (RW-00042)"],
+    ]);
+  });
+
+  it("mails only on a step forward: a correction back to a state sends nothing", () => {
+    expect(messagesForChange({ order, to: "shipped", kind: "advance" })).toHaveLength(1);
+    expect(messagesForChange({ order, to: "shipped", kind: "correction" })).toEqual([]);
+    expect(messagesForChange({ order, to: "expired", kind: "expire" })).toEqual([]);
   });
 });
 
@@ -63,7 +81,7 @@ describe("the buyer's timeline", () => {
     expect(entries.map((e) => [e.title, e.corrected])).toEqual([
       ["With the carrier", false],
       ["Back to: Boxed and weighed", true],
-      ["Checkout closed", false],
+      ["Checkout expired", false],
     ]);
   });
 });

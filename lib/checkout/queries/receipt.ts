@@ -2,7 +2,7 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { organization, type OrderRow } from "@/db/schema";
-import { receiptFor, type Receipt } from "./receipts";
+import { receiptFor, type Receipt } from "../receipts";
 
 export type OrderReceipt = Receipt & {
   refundedCents: number;

@@ -1,11 +1,11 @@
 import "server-only";
 import { asc, eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
-import { houseModels, orderLines, orders, organization, parcels, sites } from "@/db/schema";
+import { gifts, houseModels, orderLines, orders, organization, parcels, sites } from "@/db/schema";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { env } from "@/lib/config/env";
-import type { OrgFooter } from "./message-types";
-import { PermanentMailError } from "./payloads";
+import type { OrgFooter } from "../message-types";
+import { PermanentMailError } from "../payloads";
 
 /** The center's details for the footer and receipts; a store without them cannot send receipts. */
 export async function loadOrgFooter({ db }: { db: DbOrTx }): Promise<OrgFooter> {
@@ -63,3 +63,9 @@ export async function loadOrderForMail({ db, orderId }: { db: DbOrTx; orderId: s
 }
 
 export type OrderForMail = Awaited<ReturnType<typeof loadOrderForMail>>;
+
+/** The gift recorded with a paid order, for its gift receipt. */
+export async function findGiftForOrder({ db, orderId }: { db: DbOrTx; orderId: string }) {
+  const [gift] = await db.select().from(gifts).where(eq(gifts.orderId, orderId));
+  return gift ?? null;
+}

@@ -5,16 +5,9 @@ import { passwordResetTokens, users } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/passwords";
 import { env } from "@/lib/config/env";
 import { AppError } from "@/lib/http/errors";
-import { kickMailSender } from "./kick";
-import { enqueueEmail } from "./outbox";
-import { sealText } from "./sealed";
-import {
-  createToken,
-  getTokenState,
-  hashToken,
-  RESET_TOKEN_TTL_MS,
-  type TokenState,
-} from "./tokens";
+import { sealText } from "../sealed";
+import { createToken, hashToken, RESET_TOKEN_TTL_MS } from "../tokens";
+import { enqueueEmail, withOutbox } from "./outbox";
 
 // The password reset flow: a random single-use token, stored only as its SHA-256, valid for
 // 30 minutes, e-mailed through the outbox. Asking always gets the same answer, so the form
@@ -30,8 +23,7 @@ export async function requestPasswordReset({
   email: string;
   now?: Date;
 }): Promise<void> {
-  const db = await getDb();
-  await db.transaction(async (tx) => {
+  await withOutbox(async (tx) => {
     const [user] = await tx
       .select({ id: users.id, email: users.email })
       .from(users)
@@ -67,23 +59,6 @@ export async function requestPasswordReset({
       },
     });
   });
-  kickMailSender();
-}
-
-/** Whether a link still works, so the page can say so before anyone types a new password. */
-export async function checkResetToken({
-  token,
-  now = new Date(),
-}: {
-  token: string;
-  now?: Date;
-}): Promise<TokenState | "unknown"> {
-  const db = await getDb();
-  const [row] = await db
-    .select()
-    .from(passwordResetTokens)
-    .where(eq(passwordResetTokens.tokenHash, hashToken(token)));
-  return row ? getTokenState({ expiresAt: row.expiresAt, usedAt: row.usedAt, now }) : "unknown";
 }
 
 const REFUSED =

@@ -3,9 +3,9 @@ import { and, asc, count, desc, eq, gte, ilike, inArray, lt, ne, or, sql, type S
 import { getDb } from "@/db/client";
 import { orders } from "@/db/schema";
 import { parseOrderNumber } from "@/lib/checkout/order-number";
-import { BENCH_STATES, OPEN_STATES, statusesFor, type QueueParams } from "./queue-params";
-import type { FulfillmentState } from "./state-labels";
-import { dayRangeInZone } from "./store-time";
+import { BENCH_STATES, OPEN_STATES, statusesFor, type QueueParams } from "../queue-params";
+import type { FulfillmentState } from "@/lib/orders/statuses";
+import { dayRangeInZone } from "../store-time";
 
 // The shipping desk's queue: paid orders with something to ship or hand over. Gift-only orders
 // (method "none") never reach it: there is nothing to pack.

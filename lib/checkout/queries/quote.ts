@@ -1,9 +1,10 @@
 import "server-only";
 import { asc, eq, inArray } from "drizzle-orm";
-import type { DbOrTx } from "@/db/client";
+import { getDb, type DbOrTx } from "@/db/client";
 import { houseModels, organization, shippingRates, taxRates } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
-import { PricingError, quoteOrder, type Quote } from "./pricing";
+import { PricingError, quoteOrder, type Quote } from "../pricing";
+import type { QuoteRequest } from "../schemas";
 
 export type QuoteItems = { slug: string; quantity: number }[];
 
@@ -77,4 +78,26 @@ export async function quoteFromDatabase(
     }
     throw error;
   }
+}
+
+/** The cart page's quote: the same prices checkout will charge, shaped for the browser. */
+export async function quoteCart(input: QuoteRequest) {
+  const { quote } = await quoteFromDatabase(await getDb(), {
+    items: input.items,
+    method: input.method,
+    state: input.shipTo?.state,
+    giftCents: input.giftCents,
+  });
+  return {
+    lines: quote.lines,
+    subtotalCents: quote.subtotalCents,
+    shipping: {
+      method: quote.shipping.method,
+      parcels: quote.shipping.parcels.map((p) => ({ slug: p.slug, billableLb: p.billableLb, cents: p.cents })),
+      cents: quote.shipping.cents,
+    },
+    taxCents: quote.taxCents,
+    giftCents: quote.giftCents,
+    totalCents: quote.totalCents,
+  };
 }

@@ -1,11 +1,11 @@
 import "server-only";
-import { isUuid } from "./ids";
+import { isUuid } from "../ids";
 import { asc, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { orderEvents, orders, parcels } from "@/db/schema";
 import { getCenterDetails, type CenterDetails } from "./center";
-import { buyerTimeline, type TimelineEntry } from "./timeline";
-import { CARRIER_LABELS, isCarrier, validateTrackingNumber } from "./tracking";
+import { buyerTimeline, type TimelineEntry } from "../timeline";
+import { CARRIER_LABELS, isCarrier, validateTrackingNumber } from "../tracking";
 
 // What the buyer's order page shows of fulfillment. These load by order id only: the page that
 // renders them has already decided the visitor may see this order (lib/checkout/order-access.ts).

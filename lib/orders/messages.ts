@@ -1,0 +1,94 @@
+import { formatOrderNumber } from "@/lib/checkout/order-number";
+import type { OutboxMessageInput } from "@/lib/mail/payloads";
+import type { TransitionKind } from "./state-machine";
+import type { OrderStatus } from "./statuses";
+
+// The e-mails a status change causes, queued by changeOrderStatus (lib/orders/commands.ts) in the
+// transaction of the change. One message per cause (the dedupe key), so an admin's correction
+// followed by the same step again never mails the buyer twice. Templates: emails/. Messages about
+// money going back (refund, payment-refunded) are caused by the refund, not by a status, and are
+// queued when the payment service confirms it (lib/checkout/commands/refunds.ts).
+
+export type OrderMessage = OutboxMessageInput;
+
+type OrderForMail = { id: string; number: number; email: string; method: string; giftCents: number };
+
+function paidMessages(order: OrderForMail): OrderMessage[] {
+  const number = formatOrderNumber(order.number);
+  const hasItems = order.method !== "none";
+  const messages: OrderMessage[] = [
+    {
+      dedupeKey: `order-confirmation:${order.id}`,
+      kind: "order-confirmation",
+      to: order.email,
+      subject: hasItems ? `Your order ${number} is confirmed` : `Thank you for your gift (${number})`,
+      payload: { orderId: order.id },
+    },
+  ];
+  if (hasItems) {
+    messages.push({
+      dedupeKey: `install-guide:paid:${order.id}`,
+      kind: "install-guide",
+      to: order.email,
+      subject: `Your install guide for order ${number}`,
+      payload: { orderId: order.id, occasion: "paid" },
+    });
+  }
+  if (order.giftCents > 0) {
+    messages.push({
+      dedupeKey: `gift-receipt:${order.id}`,
+      kind: "gift-receipt",
+      to: order.email,
+      subject: `Your gift receipt from Cedar Hollow Wildlife Rescue (${number})`,
+      payload: { orderId: order.id },
+    });
+  }
+  return messages;
+}
+
+/** The messages to queue when an order reaches `to` by moving forward; corrections queue none. */
+export function messagesForArrival({ order, to }: { order: OrderForMail; to: OrderStatus }): OrderMessage[] {
+  const number = formatOrderNumber(order.number);
+  const base = { to: order.email, payload: { orderId: order.id } };
+  switch (to) {
+    case "paid":
+      return paidMessages(order);
+    case "shipped":
+      return [{ ...base, kind: "shipped", dedupeKey: `shipped:${order.id}`, subject: `Your order ${number} is on its way` }];
+    case "delivered":
+      return [
+        { ...base, kind: "delivered", dedupeKey: `delivered:${order.id}`, subject: `Your order ${number} has arrived` },
+        {
+          ...base,
+          kind: "install-guide",
+          dedupeKey: `install-guide:delivered:${order.id}`,
+          subject: `Time to put your house up: the install guide for ${number}`,
+          payload: { orderId: order.id, occasion: "delivered" },
+        },
+      ];
+    case "ready_for_pickup":
+      return [
+        {
+          ...base,
+          kind: "ready-for-pickup",
+          dedupeKey: `ready-for-pickup:${order.id}`,
+          subject: `Your order ${number} is ready to collect`,
+        },
+      ];
+    default:
+      return [];
+  }
+}
+
+/** The messages one change causes: only a step forward mails the buyer. */
+export function messagesForChange({
+  order,
+  to,
+  kind,
+}: {
+  order: OrderForMail;
+  to: OrderStatus;
+  kind: TransitionKind;
+}): OrderMessage[] {
+  return kind === "advance" ? messagesForArrival({ order, to }) : [];
+}
