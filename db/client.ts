@@ -87,7 +87,26 @@ export async function getDbKind(): Promise<Handle["kind"]> {
   return (await globalForDb.__roostwrightDb!).kind;
 }
 
+const globalForClose = globalThis as unknown as {
+  __roostwrightBeforeClose?: Set<() => Promise<void>>;
+};
+
+/**
+ * Work that must end before the database closes (the background job runner stops here first, so
+ * none of its queries reaches a closed PGlite). Returns a function that removes the hook.
+ */
+export function beforeCloseDb(hook: () => Promise<void>): () => void {
+  const hooks = (globalForClose.__roostwrightBeforeClose ??= new Set());
+  hooks.add(hook);
+  return () => void hooks.delete(hook);
+}
+
 export async function closeDb(): Promise<void> {
+  for (const hook of [...(globalForClose.__roostwrightBeforeClose ?? [])]) {
+    await hook().catch((error: unknown) =>
+      console.error("a shutdown step before closing the database failed", error),
+    );
+  }
   const pending = globalForDb.__roostwrightDb;
   globalForDb.__roostwrightDb = undefined;
   if (pending) await (await pending).close();

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, eq, lte, sql } from "drizzle-orm";
+import { and, asc, eq, lte, min, sql } from "drizzle-orm";
 import { getDb, type Db } from "@/db/client";
 import { outbox, type OutboxRow } from "@/db/schema";
 import { env } from "@/lib/config/env";
@@ -129,4 +129,14 @@ export async function deliverPendingMail({
     report[await deliverOne(db, row, now)] += 1;
   }
   return report;
+}
+
+/** When the earliest pending message is next due (a retry, or a claim's lease running out), or null when none waits. */
+export async function findNextMailAttempt(): Promise<Date | null> {
+  const db = await getDb();
+  const [row] = await db
+    .select({ at: min(outbox.nextAttemptAt) })
+    .from(outbox)
+    .where(eq(outbox.status, "pending"));
+  return row?.at ?? null;
 }
