@@ -1,6 +1,7 @@
 import { CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
 import { FIT_LABEL_WORDS, fitForBand, type Fit, type FitLabel } from "@/lib/catalog/fit";
 import { SHADE_LABELS, type Shade } from "@/lib/catalog/spec";
+import { describeSkylineEffect, type SkylineEffect } from "@/lib/placement/skyline-words";
 import { CAUTIONS, MOVE_IN_PATIENCE, type Caution } from "@/lib/safety/cautions";
 import { climateSection, describeSunWanted } from "./band-advice";
 import { UPKEEP_CALENDAR, type UpkeepSeason } from "./upkeep-calendar";
@@ -46,6 +47,8 @@ export type GuideSite = {
   name: string;
   label: "good" | "fair" | "poor";
   rules: readonly GuideSiteRule[];
+  /** What the saved check found the skyline does; null for a check that kept none. */
+  skylineEffect?: SkylineEffect | null;
 };
 
 export type InstallGuideInput = {
@@ -68,7 +71,13 @@ export type InstallGuide = {
     fit: { label: FitLabel; words: string; reasons: string[] } | null;
     notes: GuideItem[];
   }[];
-  site: { heading: string; summary: string; toChange: GuideItem[] } | null;
+  site: {
+    heading: string;
+    summary: string;
+    toChange: GuideItem[];
+    /** The skyline's effect on the sun in plain words (PRODUCT.md §4). */
+    skyline: string;
+  } | null;
   calendar: readonly UpkeepSeason[];
   patience: { title: string; text: string };
   cautions: readonly Caution[];
@@ -188,7 +197,13 @@ function siteSection(site: GuideSite | null): InstallGuide["site"] {
     toChange.length === 0
       ? `Your site check "${site.name}" found ${SITE_LABEL_WORDS[site.label]}: every rule passed. Mount the house there as planned.`
       : `Your site check "${site.name}" found ${SITE_LABEL_WORDS[site.label]}. Before mounting, look at ${toChange.length === 1 ? "this point" : `these ${toChange.length} points`}:`;
-  return { heading: "Your saved site", summary, toChange };
+  const skyline = describeSkylineEffect(site.skylineEffect);
+  return {
+    heading: "Your saved site",
+    summary,
+    toChange,
+    skyline: [skyline.summary, ...skyline.parts].join(" "),
+  };
 }
 
 export function buildInstallGuide(input: InstallGuideInput): InstallGuide {
