@@ -438,9 +438,15 @@ export const sites = pgTable(
     result: jsonb("result").notNull(),
     label: text("label").notNull(),
     bandId: text("band_id").notNull(),
+    /** The skyline: 16 elevation angles (degrees, 0–90), north first and clockwise; null for open sky. */
+    skyline: doublePrecision("skyline").array(),
     ...timestamps,
   },
-  (t) => [index("sites_user_idx").on(t.userId), index("sites_guest_idx").on(t.guestToken)],
+  (t) => [
+    index("sites_user_idx").on(t.userId),
+    index("sites_guest_idx").on(t.guestToken),
+    check("sites_skyline_16", sql`${t.skyline} is null or cardinality(${t.skyline}) = 16`),
+  ],
 );
 
 export type User = typeof users.$inferSelect;

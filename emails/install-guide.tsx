@@ -78,6 +78,7 @@ export function InstallGuideEmail(props: InstallGuideProps) {
           <H2>{guide.site.heading}</H2>
           <P>{guide.site.summary}</P>
           {guide.site.toChange.length > 0 ? <Items items={guide.site.toChange} /> : null}
+          <P>{guide.site.skyline}</P>
         </>
       ) : null}
 

@@ -17,6 +17,7 @@ import { PlacementCautions } from "./placement-cautions";
 import { PlacementResult } from "./placement-result";
 import { SaveSitePanel } from "./save-site-panel";
 import { SiteFields } from "./site-fields";
+import { SkylineFields } from "./skyline-fields";
 import { usePlacementCheck } from "./use-placement-check";
 
 type PlacementPlannerProps = {
@@ -35,6 +36,7 @@ export function PlacementPlanner({ signedIn, siteId }: PlacementPlannerProps) {
   });
   const [locateBy, setLocateBy] = useState<LocateBy>("zip");
   const [knowsJulyHigh, setKnowsJulyHigh] = useState(false);
+  const [describesSkyline, setDescribesSkyline] = useState(false);
   const [loaded, setLoaded] = useState<{ name: string } | null>(null);
   const [loadError, setLoadError] = useState<string | null>(null);
 
@@ -60,6 +62,7 @@ export function PlacementPlanner({ signedIn, siteId }: PlacementPlannerProps) {
       .then((site) => {
         setLocateBy(site.input.lat !== undefined ? "coordinates" : "zip");
         setKnowsJulyHigh(site.input.julyHighF !== undefined);
+        setDescribesSkyline(Array.isArray(site.input.skyline));
         form.reset({ ...PLANNER_DEFAULTS, ...site.input });
         setLoaded({ name: site.name });
       })
@@ -115,6 +118,7 @@ export function PlacementPlanner({ signedIn, siteId }: PlacementPlannerProps) {
             />
             <SiteFields />
           </section>
+          <SkylineFields describes={describesSkyline} onDescribesChange={setDescribesSkyline} />
           <div className="flex flex-wrap items-center gap-4">
             <Button type="submit" size="lg">
               Check this site
@@ -144,9 +148,9 @@ export function PlacementPlanner({ signedIn, siteId }: PlacementPlannerProps) {
                 Your check appears here
               </h2>
               <p className="mt-2 text-ink-soft">
-                Give the place and how the house will hang. We work out the hours of sun on its face
-                through the maternity season, read your summers from nearby weather stations, and
-                rate the site on ten rules, each with what to change.
+                Give the place, how the house will hang and what stands around it. We work out the
+                hours of sun on the house through the maternity season, read your summers from
+                nearby weather stations, and rate the site on ten rules, each with what to change.
               </p>
             </Card>
           )}

@@ -2,11 +2,11 @@ import Link from "next/link";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
-import { KILOMETERS_PER_MILE, formatHours, formatPercent } from "@/lib/placement/format";
+import { KILOMETERS_PER_MILE } from "@/lib/placement/format";
 import type { PlacementAnswer } from "@/lib/placement/placement-answer";
 import type { RuleStatus } from "@/lib/placement/types";
 import { RuleList, STATUS_WORDS } from "./rule-list";
-import { SunChart } from "./sun-chart";
+import { SunOnHouse } from "./sun-on-house";
 
 // Our own words for the overall rating: what it means for the buyer, in one line.
 const LABEL_LINES: Record<RuleStatus, string> = {
@@ -15,30 +15,10 @@ const LABEL_LINES: Record<RuleStatus, string> = {
   poor: "Bats are unlikely to settle here until the points marked below change.",
 };
 
-function formatDay(date: string): string {
-  const [, month, day] = date.split("-").map(Number);
-  const months = [
-    "January",
-    "February",
-    "March",
-    "April",
-    "May",
-    "June",
-    "July",
-    "August",
-    "September",
-    "October",
-    "November",
-    "December",
-  ];
-  return `${day} ${months[(month ?? 1) - 1]}`;
-}
-
 /** The answer of a check: rating, climate, sun and the ten rules. */
 export function PlacementResult({ answer }: { answer: PlacementAnswer }) {
-  const { sun, climate, band, location } = answer;
+  const { climate, band, location } = answer;
   const toChange = answer.rules.filter((r) => r.status !== "good").length;
-  const solsticeLabel = formatDay(sun.solstice.date);
   const place =
     location.source === "zip"
       ? `ZIP ${location.zip}`
@@ -129,35 +109,7 @@ export function PlacementResult({ answer }: { answer: PlacementAnswer }) {
         </p>
       </section>
 
-      <section aria-labelledby="site-sun" className="flex flex-col gap-4">
-        <h2 id="site-sun" className="font-display text-xl font-semibold text-moss-900">
-          Sun on the face
-        </h2>
-        <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-[auto_1fr]">
-          <dt className="font-bold">{sun.seasonLabel}, mean</dt>
-          <dd>
-            {formatHours(sun.seasonMeanHours)} a day, {formatPercent(sun.morningShare)} before solar
-            noon
-          </dd>
-          <dt className="font-bold">{solsticeLabel}</dt>
-          <dd>{formatHours(sun.solsticeHours)}</dd>
-          <dt className="font-bold">Face measured</dt>
-          <dd>
-            {Math.round(sun.faceDeg * 10) / 10}° ({sun.faceWords})
-          </dd>
-        </dl>
-        <Alert tone="info" title="Trees and buildings are not modelled">
-          {answer.notModelled}
-        </Alert>
-        <SunChart
-          season={sun.seasonByHour}
-          solstice={sun.solstice.byHour}
-          seasonLabel={sun.seasonLabel}
-          solsticeLabel={solsticeLabel}
-          seasonHours={sun.seasonMeanHours}
-          solsticeHours={sun.solsticeHours}
-        />
-      </section>
+      <SunOnHouse answer={answer} />
 
       <section aria-labelledby="site-rules" className="flex flex-col gap-3">
         <h2 id="site-rules" className="font-display text-xl font-semibold text-moss-900">

@@ -20,6 +20,8 @@ export type SavedSiteRow = {
   bandLabel: string;
   savedOn: string;
   orderCount: number;
+  /** The skyline's effect on the sun, in plain words (lib/placement/skyline-words.ts). */
+  skyline: string;
 };
 
 const dateFormat = new Intl.DateTimeFormat("en-US", { dateStyle: "medium", timeZone: "UTC" });
@@ -71,6 +73,7 @@ export function SavedSiteList({ sites }: { sites: SavedSiteRow[] }) {
                 ? ` · went with ${s.orderCount === 1 ? "an order" : `${s.orderCount} orders`}`
                 : ""}
             </p>
+            <p className="text-sm">{s.skyline}</p>
             {chosen?.id === s.id ? (
               <p className="text-sm font-bold text-moss-800">Goes with your next order.</p>
             ) : null}

@@ -4,6 +4,7 @@ import type { OrderRow, SiteRow } from "@/db/schema";
 import { BAND_IDS, nearBandEdge } from "@/lib/catalog/climate-bands";
 import { climateForZip } from "@/lib/catalog/climate-lookup";
 import { getStationIndex } from "@/lib/catalog/climate-service";
+import { skylineEffectSchema } from "@/lib/placement/skyline-words";
 import type { GuideClimate, GuideSite } from "./install-guide-content";
 import type { OrgFooter } from "./message-types";
 
@@ -30,6 +31,10 @@ const siteResultSchema = z.looseObject({
   climate: z.looseObject({ julyHighF: z.number().nullish() }).optional(),
   location: z.looseObject({ hemisphere: z.enum(["north", "south"]).optional() }).optional(),
   rules: z.array(ruleSchema).catch([]),
+  sun: z
+    .looseObject({ skyline: z.looseObject({ effect: skylineEffectSchema }) })
+    .optional()
+    .catch(undefined),
 });
 
 const addressSchema = z.looseObject({ zip: z.string() });
@@ -61,7 +66,12 @@ function fromSite(site: SiteRow): GuideContext | null {
     },
     site:
       result.success && label && ["good", "fair", "poor"].includes(label)
-        ? { name: site.name, label, rules: result.data.rules }
+        ? {
+            name: site.name,
+            label,
+            rules: result.data.rules,
+            skylineEffect: result.data.sun?.skyline.effect ?? null,
+          }
         : null,
     hemisphere: (result.success ? result.data.location?.hemisphere : undefined) ?? (lat !== undefined && lat < 0 ? "south" : "north"),
   };

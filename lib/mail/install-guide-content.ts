@@ -1,6 +1,7 @@
 import { CLIMATE_BANDS } from "@/lib/catalog/climate-bands";
 import { FIT_LABEL_WORDS, fitForBand, type Fit } from "@/lib/catalog/fit";
 import { SHADE_LABELS } from "@/lib/catalog/spec";
+import { describeSkylineEffect } from "@/lib/placement/skyline-words";
 import { CAUTIONS, MOVE_IN_PATIENCE } from "@/lib/safety/cautions";
 import { climateSection, describeSunWanted } from "./band-advice";
 import type { GuideHouse, GuideItem, GuideSite, InstallGuide, InstallGuideInput } from "./install-guide-types";
@@ -137,7 +138,13 @@ function siteSection(site: GuideSite | null): InstallGuide["site"] {
     toChange.length === 0
       ? `Your site check "${site.name}" found ${SITE_LABEL_WORDS[site.label]}: every rule passed. Mount the house there as planned.`
       : `Your site check "${site.name}" found ${SITE_LABEL_WORDS[site.label]}. Before mounting, look at ${toChange.length === 1 ? "this point" : `these ${toChange.length} points`}:`;
-  return { heading: "Your saved site", summary, toChange };
+  const skyline = describeSkylineEffect(site.skylineEffect);
+  return {
+    heading: "Your saved site",
+    summary,
+    toChange,
+    skyline: [skyline.summary, ...skyline.parts].join(" "),
+  };
 }
 
 export function buildInstallGuide(input: InstallGuideInput): InstallGuide {

@@ -1,6 +1,7 @@
 import type { BandId } from "@/lib/catalog/climate-bands";
 import type { FitLabel } from "@/lib/catalog/fit";
 import type { Shade } from "@/lib/catalog/spec";
+import type { SkylineEffect } from "@/lib/placement/skyline-words";
 import type { Caution } from "@/lib/safety/cautions";
 import type { UpkeepSeason } from "./upkeep-calendar";
 
@@ -41,6 +42,8 @@ export type GuideSite = {
   name: string;
   label: "good" | "fair" | "poor";
   rules: readonly GuideSiteRule[];
+  /** What the saved check found the skyline does; null for a check that kept none. */
+  skylineEffect?: SkylineEffect | null;
 };
 
 export type InstallGuideInput = {
@@ -63,7 +66,13 @@ export type InstallGuide = {
     fit: { label: FitLabel; words: string; reasons: string[] } | null;
     notes: GuideItem[];
   }[];
-  site: { heading: string; summary: string; toChange: GuideItem[] } | null;
+  site: {
+    heading: string;
+    summary: string;
+    toChange: GuideItem[];
+    /** The skyline's effect on the sun in plain words (PRODUCT.md §4). */
+    skyline: string;
+  } | null;
   calendar: readonly UpkeepSeason[];
   patience: { title: string; text: string };
   cautions: readonly Caution[];

@@ -1,17 +1,69 @@
 // The whole answer of a placement check, as `POST /api/placement` sends it and a saved site
-// keeps it: the band used, the sun on the face (season, midsummer day, hour by hour), the ten
-// rules and the label. Pure: location and climate are resolved by the caller.
+// keeps it: the band used, the sun on the house (by mount, under the skyline) and on its front
+// face, what the skyline takes, the sun's paths for the chart, the ten rules and the label.
+// Pure: location and climate are resolved by the caller.
 import type { BandId } from "@/lib/catalog/climate-bands";
 import { describeBearing, normalizeBearing } from "./bearing";
 import type { PlacementInput } from "./schema";
 import { checkPlacement, findSunFaceBearing } from "./rules";
 import type { SiteClimate, SiteLocation } from "./site-climate";
-import { seasonSunHours, type Hemisphere, type SeasonDay } from "./sun";
-import type { PlacementSite, RuleResult, RuleStatus } from "./types";
+import type { Skyline } from "./skyline";
+import { describeSkylineEffect, findMainLoss, type SkylineEffect } from "./skyline-words";
+import {
+  seasonSunOnHouse,
+  type Hemisphere,
+  type SeasonDayOnHouse,
+  type SeasonOnHouse,
+  type SunExposure,
+} from "./sun";
+import { listSeasonDates } from "./sun-calendar";
+import { traceSunPath, type SunPath } from "./sun-path";
+import type { Mount, PlacementSite, RuleResult, RuleStatus, SunOnHouseSummary } from "./types";
 
-/** Said wherever sun hours are shown (PRODUCT.md §4: "say plainly"). */
-export const NOT_MODELLED_NOTE =
-  "Sun hours are for open sky: trees, buildings and hills around the site are not modelled, so the sun your house really gets can only be less.";
+type Figure = {
+  /** Mean hours a day over the season days. */
+  hours: number;
+  morningHours: number;
+  morningShare: number;
+  /** Hours on the midsummer day (June 21 north, December 21 south). */
+  solsticeHours: number;
+  /** The season mean with nothing blocking the sky. */
+  openSkyHours: number;
+};
+
+export type PlacementSun = {
+  seasonLabel: string;
+  mount: Mount;
+  exposure: SunExposure;
+  /** P4 rates this: by mount, under the skyline. */
+  house: Figure;
+  /** The front face (the better half of a back-to-back pair), under the skyline. */
+  face: Figure & { deg: number; words: string };
+  /** A pole in the open here: the most sun any house at this place can get. */
+  openPoleHours: number;
+  /** The sunniest wall here under this skyline. */
+  bestWall: { deg: number; words: string; hours: number };
+  skyline: {
+    /** The 16 angles given (all zeros for a described open field), or null when none was given. */
+    profile: number[] | null;
+    effect: SkylineEffect;
+    /** Plain words: what was assumed, or what the skyline takes in all … */
+    summary: string;
+    /** … and where (one sentence per stretch of skyline that takes sun). */
+    parts: string[];
+  };
+  byDate: SeasonDayOnHouse[];
+  /** Minutes per local solar hour (24 entries each): season means and the midsummer day. */
+  byHour: {
+    seasonHouse: number[];
+    seasonFace: number[];
+    solsticeHouse: number[];
+    solsticeFace: number[];
+  };
+  solsticeDate: string;
+  /** The sun's path at midsummer and on the season day with the lowest sun, for the chart. */
+  paths: { solstice: SunPath; seasonLow: SunPath };
+};
 
 export type PlacementAnswer = {
   location: SiteLocation & { hemisphere: Hemisphere };
@@ -23,25 +75,9 @@ export type PlacementAnswer = {
     shades: readonly string[];
     ventsNeeded: boolean;
   };
-  sun: {
-    /** Mean hours a day over the season days (P4 rates this). */
-    seasonMeanHours: number;
-    /** Hours on the midsummer day (June 21 north, December 21 south). */
-    solsticeHours: number;
-    /** Share of the season's sun that comes before solar noon. */
-    morningShare: number;
-    seasonLabel: string;
-    /** The face the hours are for: the house, or the better half of a back-to-back pair. */
-    faceDeg: number;
-    faceWords: string;
-    byDate: SeasonDay[];
-    /** Mean minutes of sun in each local solar hour over the season (24 entries). */
-    seasonByHour: number[];
-    solstice: { date: string; hours: number; morningHours: number; byHour: number[] };
-  };
+  sun: PlacementSun;
   rules: RuleResult[];
   label: RuleStatus;
-  notModelled: string;
 };
 
 export function toPlacementSite({
@@ -67,6 +103,59 @@ export function toPlacementSite({
   };
 }
 
+export function toSkylineEffect({
+  season,
+  skyline,
+}: {
+  season: Pick<SeasonOnHouse, "lostMorning" | "lostAfternoon" | "openSky" | "house">;
+  skyline: Skyline | null | undefined;
+}): SkylineEffect {
+  return {
+    described: skyline !== null && skyline !== undefined,
+    lostMorning: season.lostMorning,
+    lostAfternoon: season.lostAfternoon,
+    openSkyHours: season.openSky.houseHours,
+    hours: season.house.hours,
+  };
+}
+
+/** The figures P4 reads, from a season computed at the site's sun face. */
+export function summarizeSeasonSun({
+  season,
+  site,
+  faceDeg,
+  skyline,
+}: {
+  season: SeasonOnHouse;
+  site: Pick<PlacementSite, "mount" | "pairedBackToBack">;
+  faceDeg: number;
+  skyline: Skyline | null | undefined;
+}): SunOnHouseSummary {
+  const effect = toSkylineEffect({ season, skyline });
+  return {
+    mount: site.mount,
+    pairedBackToBack: site.pairedBackToBack,
+    house: season.house,
+    face: { ...season.face, deg: faceDeg },
+    bestWall: season.bestWall,
+    openPoleHours: season.openSky.allRoundHours,
+    skyline: {
+      described: effect.described,
+      lostHours: Math.max(0, season.openSky.houseHours - season.house.hours),
+      mainDirection: effect.described ? findMainLoss(effect) : null,
+    },
+  };
+}
+
+/** The season day whose sun stands lowest at noon: the lower edge of the season's band of paths. */
+function traceSeasonLowPath({ lat, lon }: { lat: number; lon: number }): SunPath {
+  const dates = listSeasonDates({ lat });
+  const edges = [dates[0], dates.at(-1)].filter((d): d is string => Boolean(d));
+  const paths = edges.map((date) => traceSunPath({ lat, lon, date }));
+  const peak = (path: SunPath) => Math.max(-90, ...path.points.map((p) => p.altitude));
+  return paths.reduce((low, path) => (peak(path) < peak(low) ? path : low));
+}
+
 export function buildPlacementAnswer({
   input,
   location,
@@ -77,10 +166,21 @@ export function buildPlacementAnswer({
   climate: SiteClimate;
 }): PlacementAnswer {
   const site = toPlacementSite({ input, location });
+  // Given (even as all zeros, "open field") or not: only an absent skyline is "assumed open".
+  const skyline = input.skyline ?? null;
   const faceDeg = normalizeBearing(findSunFaceBearing(site));
-  const season = seasonSunHours({ lat: site.lat, lon: site.lon, facingDeg: faceDeg });
-  const { rules, label } = checkPlacement(site, { julyHighF: climate.julyHighF, sun: season });
+  const season = seasonSunOnHouse({
+    lat: site.lat,
+    lon: site.lon,
+    facingDeg: faceDeg,
+    mount: site.mount,
+    skyline,
+  });
+  const summary = summarizeSeasonSun({ season, site, faceDeg, skyline });
+  const { rules, label } = checkPlacement(site, { julyHighF: climate.julyHighF, sun: summary });
   const { band, ...climateRest } = climate;
+  const effect = toSkylineEffect({ season, skyline });
+  const words = describeSkylineEffect(effect);
 
   return {
     location: { ...location, hemisphere: season.hemisphere },
@@ -93,23 +193,44 @@ export function buildPlacementAnswer({
       ventsNeeded: band.ventsNeeded,
     },
     sun: {
-      seasonMeanHours: season.hours,
-      solsticeHours: season.solstice.hours,
-      morningShare: season.morningShare,
       seasonLabel: season.seasonLabel,
-      faceDeg,
-      faceWords: describeBearing(faceDeg),
+      mount: site.mount,
+      exposure: season.exposure,
+      house: {
+        ...pickTally(season.house),
+        solsticeHours: season.solstice.house.hours,
+        openSkyHours: season.openSky.houseHours,
+      },
+      face: {
+        ...pickTally(season.face),
+        solsticeHours: season.solstice.face.hours,
+        openSkyHours: season.openSky.faceHours,
+        deg: faceDeg,
+        words: describeBearing(faceDeg),
+      },
+      openPoleHours: season.openSky.allRoundHours,
+      bestWall: { ...season.bestWall, words: describeBearing(season.bestWall.deg) },
+      skyline: { profile: skyline ? [...skyline] : null, effect, ...words },
       byDate: season.byDate,
-      seasonByHour: season.meanByHour,
-      solstice: {
-        date: season.solstice.date,
-        hours: season.solstice.hours,
-        morningHours: season.solstice.morningHours,
-        byHour: season.solstice.byHour,
+      byHour: {
+        seasonHouse: season.house.byHour,
+        seasonFace: season.face.byHour,
+        solsticeHouse: season.solstice.house.byHour,
+        solsticeFace: season.solstice.face.byHour,
+      },
+      solsticeDate: season.solstice.date,
+      paths: {
+        solstice: traceSunPath({ lat: site.lat, lon: site.lon, date: season.solstice.date }),
+        seasonLow: traceSeasonLowPath(site),
       },
     },
     rules,
     label,
-    notModelled: NOT_MODELLED_NOTE,
   };
 }
+
+const pickTally = ({ hours, morningHours, morningShare }: SeasonOnHouse["house"]) => ({
+  hours,
+  morningHours,
+  morningShare,
+});

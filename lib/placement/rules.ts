@@ -1,11 +1,17 @@
 // The placement check (PRODUCT.md §4): ten rules P1–P10 on a planned site, and the overall
 // label, which is the worst of them. Pure functions; the season sun (P4) is computed by the
-// caller with seasonSunHours() at findSunFaceBearing(site) and passed in.
+// caller with seasonSunOnHouse() at findSunFaceBearing(site) and passed in as a summary.
 import { checkFacing } from "./facing-rule";
 import { formatFeet, formatMiles } from "./format";
 import { getHemisphere } from "./sun";
 import { checkSun } from "./sun-rule";
-import type { PlacementResult, PlacementSite, RuleResult, RuleStatus, SunSummary } from "./types";
+import type {
+  PlacementResult,
+  PlacementSite,
+  RuleResult,
+  RuleStatus,
+  SunOnHouseSummary,
+} from "./types";
 
 export { checkFacing, findSunFaceBearing, rateFacing } from "./facing-rule";
 export { checkSun, getSunRegime, rateSun } from "./sun-rule";
@@ -215,7 +221,7 @@ export function findWorstStatus(rules: Pick<RuleResult, "status">[]): RuleStatus
 
 export function checkPlacement(
   site: PlacementSite,
-  { julyHighF, sun }: { julyHighF: number; sun: SunSummary },
+  { julyHighF, sun }: { julyHighF: number; sun: SunOnHouseSummary },
 ): PlacementResult {
   const rules = [
     checkMount(site),

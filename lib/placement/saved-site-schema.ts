@@ -23,6 +23,8 @@ export type SavedSiteReceipt = {
   label: "good" | "fair" | "poor";
   bandId: BandId;
   julyHighF: number;
+  /** The 16 skyline angles saved with the site, or null when an open sky was assumed. */
+  skyline: number[] | null;
   zip?: string;
   guestToken?: string;
   createdAt: string;

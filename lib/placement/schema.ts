@@ -1,8 +1,10 @@
 // Inputs of the placement endpoints, with the messages a buyer reads next to each field.
 //   POST /api/placement  body: placementInputSchema (JSON: numbers must arrive as numbers)
-//   GET  /api/sun-hours  query: sunHoursQuerySchema (strings from the URL, coerced here)
+//   GET  /api/sun-hours  query: sunHoursQuerySchema (strings from the URL, coerced here;
+//                        skyline as a comma list of 16 angles, north first)
 import { z } from "zod";
-import { isCalendarDate } from "./sun";
+import { findSkylineProblem, parseSkylineQuery } from "./skyline";
+import { isCalendarDate } from "./sun-calendar";
 
 function jsonNumber(label: string) {
   return z.number({
@@ -31,6 +33,18 @@ const facing = jsonNumber("Facing")
   .min(0, "Facing must be a compass bearing from 0° up to (not including) 360°.")
   .lt(360, "Facing must be a compass bearing from 0° up to (not including) 360°.");
 
+/**
+ * The site's skyline (PRODUCT.md §4): exactly 16 finite angles from 0 to 90°, north first and
+ * clockwise. Any fault is one message on the `skyline` field, naming the direction.
+ */
+export const skylineSchema = z.custom<number[]>((value) => findSkylineProblem(value) === null, {
+  error: (issue) => findSkylineProblem(issue.input) ?? "Check the skyline angles.",
+});
+
+const mountSchema = z.enum(["pole", "building", "tree"], {
+  error: "Choose where the house goes: a pole, a building wall or a tree.",
+});
+
 export const placementInputSchema = z
   .object({
     zip: optionalJson(
@@ -47,9 +61,7 @@ export const placementInputSchema = z
         .min(30, "Enter the average July high in °F (between 30 and 130).")
         .max(130, "Enter the average July high in °F (between 30 and 130)."),
     ),
-    mount: z.enum(["pole", "building", "tree"], {
-      error: "Choose where the house goes: a pole, a building wall or a tree.",
-    }),
+    mount: mountSchema,
     heightFt: jsonNumber("Height")
       .min(0, "Height can't be below the ground.")
       .max(100, "Height above 100 ft looks like a typo: enter feet above the ground."),
@@ -61,6 +73,8 @@ export const placementInputSchema = z
     clearFlightPath: jsonBoolean("is the flight path below the house clear?"),
     brightLight: jsonBoolean("is there a bright light on or near the house?"),
     predators: jsonBoolean("are there outdoor cats or other predators nearby?"),
+    // Optional: without it an open sky is assumed, and the answer says so.
+    skyline: optionalJson(skylineSchema),
   })
   .superRefine((input, ctx) => {
     const hasLat = input.lat !== undefined;
@@ -99,6 +113,13 @@ export const sunHoursQuerySchema = z.object({
   lat: queryNumber(latitude),
   lon: queryNumber(longitude),
   facingDeg: queryNumber(facing),
+  // Optional: with a mount the answer adds the sun on the house by mount (PRODUCT.md §4).
+  mount: z.preprocess(
+    (value) => (value === null || value === "" ? undefined : value),
+    mountSchema.optional(),
+  ),
+  // Optional: 16 angles as a comma list, north first and clockwise ("0,0,5,20,…").
+  skyline: z.preprocess(parseSkylineQuery, skylineSchema.optional()),
   // Optional: without a date the endpoint can answer with the whole season.
   date: z.preprocess(
     (value) => (value === null || value === "" ? undefined : value),

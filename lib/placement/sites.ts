@@ -1,6 +1,6 @@
 import "server-only";
 import { randomBytes, timingSafeEqual } from "node:crypto";
-import { count, desc, eq } from "drizzle-orm";
+import { count, desc, eq, sql } from "drizzle-orm";
 import { z } from "zod";
 import { getDb } from "@/db/client";
 import { orders, sites, type SiteRow } from "@/db/schema";
@@ -16,6 +16,8 @@ export type SiteViewer = { userId: string | null; guestToken: string | null };
 export type SiteSummary = Pick<SiteRow, "id" | "name" | "label" | "bandId" | "createdAt"> & {
   /** Orders this site went with; such a site is kept for their install guides. */
   orderCount: number;
+  /** What the saved check found the skyline does (lib/placement/skyline-words.ts), if kept. */
+  skylineEffect: unknown;
 };
 
 /** 24 random bytes (192 bits) as base64url: unguessable, and short enough for localStorage. */
@@ -66,6 +68,7 @@ export async function createSite({
       result: answer,
       label: answer.label,
       bandId: answer.band.id,
+      skyline: answer.sun.skyline.profile,
     })
     .returning();
   if (!site) throw new Error("The site was not saved.");
@@ -95,6 +98,7 @@ export async function listSitesByUser({ userId }: { userId: string }): Promise<S
       bandId: sites.bandId,
       createdAt: sites.createdAt,
       orderCount: count(orders.id),
+      skylineEffect: sql<unknown>`${sites.result} -> 'sun' -> 'skyline' -> 'effect'`,
     })
     .from(sites)
     .leftJoin(orders, eq(orders.siteId, sites.id))

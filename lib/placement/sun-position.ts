@@ -21,6 +21,16 @@ const J2000_MS = Date.UTC(2000, 0, 1, 12);
 const REFRACTION_0 = 0.0002967 / Math.tan(0.00312536 / 0.08901179);
 export const SIN_VISIBLE_ALTITUDE = Math.sin(-REFRACTION_0);
 
+/**
+ * Apparent altitude (radians, refraction added as Meeus 16.4 and suncalc do) from the sine of
+ * the true altitude: what a skyline angle measured by eye or by a phone is compared with.
+ */
+export function apparentAltitude(sinAltitude: number): number {
+  const h = Math.asin(sinAltitude);
+  const hClamped = Math.max(h, 0);
+  return h + 0.0002967 / Math.tan(hClamped + 0.00312536 / (hClamped + 0.08901179));
+}
+
 // Greenwich mean sidereal time in degrees: SIDEREAL_AT_J2000 + SIDEREAL_PER_DAY × days.
 const SIDEREAL_AT_J2000 = 280.46061837;
 const SIDEREAL_PER_DAY = 360.98564736629;
@@ -75,11 +85,8 @@ export function getSunPosition({ lat, lon, at }: { lat: number; lon: number; at:
   const days = (at.getTime() - J2000_MS) / DAY_MS;
   const { ra, dec } = getSunEquatorial(days);
   const v = toSunVector({ phi: lat * RAD, dec, H: getHourAngle({ days, lon, ra }) });
-  const h = Math.asin(v.sinAltitude);
-  const hClamped = Math.max(h, 0);
-  const refraction = 0.0002967 / Math.tan(hClamped + 0.00312536 / (hClamped + 0.08901179));
   return {
-    altitude: (h + refraction) / RAD,
+    altitude: apparentAltitude(v.sinAltitude) / RAD,
     azimuth: (((Math.atan2(v.east, v.north) / RAD) % 360) + 360) % 360,
   };
 }

@@ -41,7 +41,28 @@ export type RuleResult = {
   source: string;
 };
 
-/** The two figures of a season sun result that P4 needs (a SeasonSun fits). */
+/** Hours a day and the share of them before solar noon (a season tally fits). */
 export type SunSummary = { hours: number; morningShare: number };
+
+/** What P4 needs of a season's sun (PRODUCT.md §4): lib/placement/sun-rule.ts rates `house`. */
+export type SunOnHouseSummary = {
+  mount: Mount;
+  pairedBackToBack: boolean;
+  /** By mount, under the skyline: a wall from the front only, a pole (or tree) all round. */
+  house: SunSummary;
+  /** The front face, under the skyline (shown beside the house figure). */
+  face: SunSummary & { deg: number };
+  /** The sunniest whole-degree wall bearing here, under the skyline. */
+  bestWall: { deg: number; hours: number };
+  /** A pole in the open (no skyline) at this place: the most sun any house here can get. */
+  openPoleHours: number;
+  skyline: {
+    described: boolean;
+    /** Hours a day the skyline takes from the house figure. */
+    lostHours: number;
+    /** Where most of that loss lies, in words ("east"), when it is worth naming. */
+    mainDirection: string | null;
+  };
+};
 
 export type PlacementResult = { rules: RuleResult[]; label: RuleStatus };

@@ -16,7 +16,7 @@ export default async function PlacementPage({
     <PageShell>
       <PageHeader
         title="Will bats like this spot?"
-        lead="Most empty bat houses hang in the wrong place. Describe the spot you have in mind and we rate it rule by rule, with the hours of sun on the house face worked out for your place and bearing."
+        lead="Most empty bat houses hang in the wrong place. Describe the spot you have in mind and we rate it rule by rule, with the hours of sun on the house worked out for your place, mount and skyline."
       />
       <PlacementPlanner signedIn={user !== null} siteId={siteId} />
     </PageShell>

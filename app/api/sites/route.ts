@@ -21,6 +21,7 @@ export const POST = route({ public: true }, async ({ request }): Promise<SavedSi
     label: answer.label,
     bandId: answer.band.id,
     julyHighF: answer.climate.julyHighF,
+    skyline: answer.sun.skyline.profile,
     ...(answer.location.zip ? { zip: answer.location.zip } : {}),
     ...(guestToken ? { guestToken } : {}),
     createdAt: site.createdAt.toISOString(),

@@ -32,7 +32,18 @@ const goodSite: PlacementSite = {
   brightLight: false,
   predators: false,
 };
-const goodSun = { julyHighF: 88, sun: { hours: 8, morningShare: 0.7 } };
+const goodSun = {
+  julyHighF: 88,
+  sun: {
+    mount: "pole" as const,
+    pairedBackToBack: false,
+    house: { hours: 14, morningShare: 0.5 },
+    face: { hours: 8, morningShare: 0.7, deg: 157 },
+    bestWall: { deg: 150, hours: 9 },
+    openPoleHours: 14,
+    skyline: { described: false, lostHours: 0, mainDirection: null },
+  },
+};
 
 function expectWellFormed(rule: RuleResult) {
   expect(rule.reason.length).toBeGreaterThan(10);
@@ -164,7 +175,10 @@ describe("checkPlacement: worst-of label", () => {
   });
 
   it("a poor sun rule alone makes the site poor", () => {
-    const result = checkPlacement(goodSite, { julyHighF: 88, sun: { hours: 3, morningShare: 1 } });
+    const result = checkPlacement(goodSite, {
+      julyHighF: 88,
+      sun: { ...goodSun.sun, house: { hours: 3, morningShare: 1 } },
+    });
     expect(result.label).toBe("poor");
   });
 
@@ -180,14 +194,20 @@ describe("checkPlacement: worst-of label", () => {
       brightLight: true,
       predators: true,
     };
-    const result = checkPlacement(worst, { julyHighF: 75, sun: { hours: 2, morningShare: 0 } });
+    const result = checkPlacement(worst, {
+      julyHighF: 75,
+      sun: { ...goodSun.sun, mount: "tree", house: { hours: 2, morningShare: 0 } },
+    });
     result.rules.forEach(expectWellFormed);
     expect(result.rules.filter((r) => r.status !== "good")).toHaveLength(9);
   });
 
   it("mirrors in the southern hemisphere: north-northeast is good, advice leans north", () => {
     const site = { ...goodSite, lat: -33.9, lon: 151.2, facingDeg: 22 };
-    const result = checkPlacement(site, { julyHighF: 104, sun: { hours: 7, morningShare: 0.3 } });
+    const result = checkPlacement(site, {
+      julyHighF: 104,
+      sun: { ...goodSun.sun, house: { hours: 7, morningShare: 0.3 } },
+    });
     expect(result.rules.find((r) => r.id === "P3")?.status).toBe("good");
     const sun = result.rules.find((r) => r.id === "P4");
     expect(sun?.status).toBe("fair");

@@ -122,3 +122,47 @@ describe("sunHoursQuerySchema", () => {
     expect(sunHoursQuerySchema.safeParse({ ...query, lat: "0x10" }).success).toBe(false);
   });
 });
+
+describe("the skyline field", () => {
+  const skyline = [0, 0, 5, 20, 30, 20, 5, 0, 0, 0, 0, 0, 0, 0, 0, 0];
+
+  it("is optional in the body, and kept as given", () => {
+    expect(placementInputSchema.parse(body).skyline).toBeUndefined();
+    expect(placementInputSchema.parse({ ...body, skyline: null }).skyline).toBeUndefined();
+    expect(placementInputSchema.parse({ ...body, skyline }).skyline).toEqual(skyline);
+  });
+
+  it.each([
+    ["a string", "0,0,0"],
+    ["15 angles", skyline.slice(1)],
+    ["an angle above 90", [...skyline.slice(0, 15), 91]],
+    ["a negative angle", [-1, ...skyline.slice(1)]],
+    ["a null angle", [null, ...skyline.slice(1)]],
+    ["an angle as text", ["5", ...skyline.slice(1)]],
+  ])("refuses %s with one message on the skyline field", (_name, value) => {
+    const errors = fieldErrors(placementInputSchema.safeParse({ ...body, skyline: value }));
+    expect(Object.keys(errors)).toEqual(["skyline"]);
+    expect(errors.skyline?.[0]).toMatch(/skyline|angle toward/);
+  });
+
+  it("reads a comma list in the sun-hours query, with a mount", () => {
+    const parsed = sunHoursQuerySchema.parse({
+      lat: "40",
+      lon: "-105",
+      facingDeg: "160",
+      mount: "pole",
+      skyline: skyline.join(","),
+    });
+    expect(parsed.skyline).toEqual(skyline);
+    expect(parsed.mount).toBe("pole");
+    const bad = fieldErrors(
+      sunHoursQuerySchema.safeParse({ lat: "40", lon: "-105", facingDeg: "160", skyline: "0,1e1" }),
+    );
+    expect(Object.keys(bad)).toEqual(["skyline"]);
+    expect(
+      fieldErrors(
+        sunHoursQuerySchema.safeParse({ lat: "40", lon: "-105", facingDeg: "160", mount: "roof" }),
+      ).mount,
+    ).toBeDefined();
+  });
+});

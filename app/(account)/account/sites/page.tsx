@@ -6,9 +6,17 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { requirePageUser } from "@/lib/auth/guard";
 import { isBandId } from "@/lib/catalog/band-choice";
 import { CLIMATE_BANDS } from "@/lib/catalog/climate-bands";
+import { describeSkylineEffect, skylineEffectSchema } from "@/lib/placement/skyline-words";
 import { listSitesByUser } from "@/lib/placement/sites";
 
 export const metadata: Metadata = { title: "Your saved sites" };
+
+// A site saved before skylines were kept has none: its check assumed an open sky.
+function describeSavedSkyline(stored: unknown): string {
+  const effect = skylineEffectSchema.safeParse(stored);
+  const words = describeSkylineEffect(effect.success ? effect.data : null);
+  return [words.summary, ...words.parts].join(" ");
+}
 
 export default async function SavedSitesPage() {
   const user = await requirePageUser("account", "/account/sites");
@@ -41,6 +49,7 @@ export default async function SavedSitesPage() {
             bandLabel: isBandId(s.bandId) ? CLIMATE_BANDS[s.bandId].label : s.bandId,
             savedOn: s.createdAt.toISOString(),
             orderCount: s.orderCount,
+            skyline: describeSavedSkyline(s.skylineEffect),
           }))}
         />
       )}

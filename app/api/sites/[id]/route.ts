@@ -19,8 +19,8 @@ const notFound = () => new AppError("not_found", "We could not find that saved s
 export const GET = route<Params>({ public: true }, async ({ request, params }) => {
   const site = await getSiteForViewer({ id: params.id, viewer: await viewerOf(request) });
   if (!site) throw notFound();
-  const { id, name, input, result, label, bandId, createdAt } = site;
-  return { id, name, input, result, label, bandId, createdAt: createdAt.toISOString() };
+  const { id, name, input, result, label, bandId, skyline, createdAt } = site;
+  return { id, name, input, result, label, bandId, skyline, createdAt: createdAt.toISOString() };
 });
 
 export const DELETE = route<Params>({ public: true }, async ({ request, params }) => {

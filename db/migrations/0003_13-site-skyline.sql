@@ -1,0 +1,2 @@
+ALTER TABLE "sites" ADD COLUMN "skyline" double precision[];--> statement-breakpoint
+ALTER TABLE "sites" ADD CONSTRAINT "sites_skyline_16" CHECK ("sites"."skyline" is null or cardinality("sites"."skyline") = 16);
