@@ -2,6 +2,7 @@ import "server-only";
 import { deliverPendingMail } from "./sender";
 import { registerMailKick } from "./kick";
 import { queueSeasonalReminders } from "./seasonal-job";
+import { queueRoostReportMail } from "@/lib/roost-reports/season-job";
 
 // The mail jobs of one server process: the outbox sender every few seconds (and at once when an
 // event kicks it), and the seasonal reminders once a day. Started from instrumentation.ts.
@@ -39,8 +40,9 @@ export function startMailJobs(): () => void {
     if (today === lastDay) return;
     try {
       const { queued } = await queueSeasonalReminders({ now: new Date() });
+      const roost = await queueRoostReportMail({ now: new Date() });
       lastDay = today;
-      if (queued > 0) void send();
+      if (queued + roost.asked + roost.advised > 0) void send();
     } catch (error) {
       console.error("mail: queueing seasonal reminders failed; it tries again in a minute", error);
     }

@@ -8,6 +8,7 @@ import { composeOrderMessage } from "./compose-order";
 import type { Composition } from "./composition";
 import { PermanentMailError } from "./payloads";
 import { PLAIN_TEXT_OPTIONS } from "./plain-text";
+import { composeRoostReportMessage, ROOST_MAIL_KINDS } from "@/lib/roost-reports/compose-mail";
 
 const ORDER_KINDS = new Set([
   "order-confirmation",
@@ -26,7 +27,7 @@ const ACCOUNT_KINDS = new Set([
 ]);
 
 /** Every kind of message the sender can render; anything else waits as "failed" for a developer. */
-export const MAIL_KINDS = [...ORDER_KINDS, "install-guide", ...ACCOUNT_KINDS] as const;
+export const MAIL_KINDS = [...ORDER_KINDS, "install-guide", ...ACCOUNT_KINDS, ...ROOST_MAIL_KINDS] as const;
 
 export type RenderedMessage = Omit<Composition, "element"> & { html: string; text: string };
 
@@ -42,6 +43,8 @@ function compose({
     return composeOrderMessage({ db, kind: row.kind, payload: row.payload });
   if (ACCOUNT_KINDS.has(row.kind))
     return composeAccountMessage({ db, kind: row.kind, payload: row.payload });
+  if ((ROOST_MAIL_KINDS as readonly string[]).includes(row.kind))
+    return composeRoostReportMessage({ db, kind: row.kind, payload: row.payload });
   return Promise.reject(new PermanentMailError(`No template for kind "${row.kind}".`));
 }
 
