@@ -2,7 +2,7 @@ import "server-only";
 import { env } from "@/lib/config/env";
 import { AppError } from "@/lib/http/errors";
 import { recordHouseReport } from "./commands";
-import { getHouseLine } from "./queries";
+import { getHouseLine, getLinkedHouse } from "./queries";
 import type { LinkAnswerInput } from "./report-input";
 import { tokenFingerprint, TOKEN_REFUSAL_WORDS, verifyAnswerToken, verifyOptOutToken } from "./report-tokens";
 import { optOutOfRoostQuestions } from "./commands";
@@ -38,4 +38,26 @@ export async function stopFromLink({ token, now = new Date() }: { token: string;
   }
   await optOutOfRoostQuestions({ email: verified.claims.email });
   return { email: verified.claims.email };
+}
+
+/** What an answer link would record, shown before the buyer confirms (GET changes nothing). */
+export async function previewLinkAnswer({ token, now = new Date() }: { token: string; now?: Date }) {
+  const verified = verifyAnswerToken({ secret: env().NEXTAUTH_SECRET, token, now });
+  if (!verified.ok) return { ok: false as const, message: TOKEN_REFUSAL_WORDS[verified.reason] };
+  const house = await getLinkedHouse(verified.claims);
+  if (!house) return { ok: false as const, message: "The house this link is about is no longer on an order." };
+  const { line } = house;
+  return {
+    ok: true as const,
+    claims: verified.claims,
+    title: line.quantity > 1 ? `${line.modelName}, house ${verified.claims.unit} of ${line.quantity}` : line.modelName,
+    seasonLabel: house.seasonLabel,
+    hemisphere: line.hemisphere,
+    current: house.current,
+  };
+}
+
+/** Whether an opt-out link is ours and still good, without using it. */
+export function checkStopLink({ token, now = new Date() }: { token: string; now?: Date }): boolean {
+  return verifyOptOutToken({ secret: env().NEXTAUTH_SECRET, token, now }).ok;
 }
