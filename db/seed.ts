@@ -1,6 +1,7 @@
 import { count, eq } from "drizzle-orm";
 import { hashPassword } from "@/lib/auth/passwords";
 import type { Db } from "./client";
+import { seedDemoRoostReports } from "./seed-roost-reports";
 import { DEMO_MODELS, DEMO_ORGANIZATION, DEMO_SHIPPING_RATES, DEMO_TAX_RATES, DEMO_USERS } from "./seed-data";
 import {
   houseModels,
@@ -93,4 +94,5 @@ export async function seedDemo(db: Db, now = new Date()): Promise<void> {
       }
     });
   }
+  await seedDemoRoostReports(db, now);
 }
