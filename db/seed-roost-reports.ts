@@ -1,6 +1,7 @@
+import { randomBytes } from "node:crypto";
 import { count, eq, inArray } from "drizzle-orm";
 import type { Db } from "./client";
-import { houseModels, roostReports } from "./schema";
+import { houseModels, orderEvents, orderLines, orders, outbox, roostReports } from "./schema";
 
 // Invented roost reports on the invented models, marked demo (PRODUCT.md §8): enough houses
 // known through two summers on four models to show a rate, too few on the others to show
@@ -86,4 +87,60 @@ export async function seedDemoRoostReports(db: Db, now = new Date()): Promise<vo
   if (newest[3]) Object.assign(newest[3], { review: "new" });
   if (newest[5]) Object.assign(newest[5], { review: "follow_up", reviewReason: "Ask whether the house faces the street light." });
   await db.insert(roostReports).values(rows);
+}
+
+/** The invented guest buyer whose end-of-season question waits in the demo inbox. */
+export const DEMO_REPORT_BUYER = { name: "Hazel Brightwater", email: "hazel.brightwater@larkspur-falls.example" };
+
+/**
+ * For the running demo store only (scripts/start.ts on a fresh database), never the test seed:
+ * a guest's order of two Hollow Four houses, delivered before the summer two seasons ago, and
+ * the end-of-season question the season job queued for it last September, exactly as that job
+ * writes it (its dedupe key stops the job from asking again). The sender mails it on start, so
+ * the mail inbox shows a real one-click question to answer without signing in.
+ */
+export async function seedDemoReportQuestion(db: Db, now = new Date()): Promise<void> {
+  const [model] = await db.select().from(houseModels).where(eq(houseModels.slug, "hollow-four"));
+  if (!model) return;
+  const year = now.getUTCFullYear();
+  const season = now.getUTCMonth() >= 8 ? year : year - 1;
+  const at = (month: number, day: number) => new Date(Date.UTC(season - 1, month - 1, day, 17));
+  await db.transaction(async (tx) => {
+    const [order] = await tx
+      .insert(orders)
+      .values({
+        email: DEMO_REPORT_BUYER.email,
+        name: DEMO_REPORT_BUYER.name,
+        accessToken: randomBytes(24).toString("base64url"),
+        status: "delivered",
+        method: "parcel",
+        shipTo: { name: DEMO_REPORT_BUYER.name, line1: "7 Quillwort Lane", line2: "", city: "Larkspur Falls", state: "OR", zip: "97399" },
+        subtotalCents: model.priceCents * 2,
+        shippingCents: 2600,
+        taxCents: 0,
+        giftCents: 0,
+        totalCents: model.priceCents * 2 + 2600,
+        paidAt: at(4, 20),
+        createdAt: at(4, 20),
+      })
+      .returning();
+    const [line] = await tx
+      .insert(orderLines)
+      .values({ orderId: order!.id, modelId: model.id, slug: model.slug, name: model.name, unitPriceCents: model.priceCents, quantity: 2, billableLb: 21 })
+      .returning();
+    await tx.insert(orderEvents).values([
+      { orderId: order!.id, fromStatus: "pending_payment", toStatus: "paid", note: "Payment received", createdAt: at(4, 20) },
+      { orderId: order!.id, fromStatus: "shipped", toStatus: "delivered", note: "Marked delivered", createdAt: at(5, 2) },
+    ]);
+    await tx
+      .insert(outbox)
+      .values({
+        dedupeKey: `roost-ask:${season}:${order!.id}`,
+        kind: "roost-report-ask",
+        toAddress: DEMO_REPORT_BUYER.email,
+        subject: `Did bats move in? Your bat houses, summer ${season}`,
+        payload: { orderId: order!.id, season, houses: [1, 2].map((unit) => ({ orderLineId: line!.id, unit })) },
+      })
+      .onConflictDoNothing();
+  });
 }

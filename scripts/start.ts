@@ -8,6 +8,7 @@ import { existsSync } from "node:fs";
 import path from "node:path";
 import { closeDb, getDb } from "@/db/client";
 import { isEmpty, seedDemo } from "@/db/seed";
+import { seedDemoReportQuestion } from "@/db/seed-roost-reports";
 import { importClimateIfEmpty } from "@/lib/catalog/climate-store";
 import { env } from "@/lib/config/env";
 import { startMailStandIn } from "@/lib/stand-ins/mail/server";
@@ -24,6 +25,7 @@ async function prepareDatabase() {
   if (await isEmpty(db)) {
     console.log("• Loading the demo scenario…");
     await seedDemo(db);
+    await seedDemoReportQuestion(db);
   }
   const imported = await importClimateIfEmpty(db, settings.NOAA_DIR);
   if (imported) console.log(`• Imported ${imported.stations} climate stations (${imported.skipped} lines skipped).`);
