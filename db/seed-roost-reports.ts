@@ -1,7 +1,7 @@
 import { randomBytes } from "node:crypto";
 import { count, eq, inArray } from "drizzle-orm";
 import type { Db } from "./client";
-import { houseModels, orderEvents, orderLines, orders, outbox, roostReports } from "./schema";
+import { houseModels, orderEvents, orderLines, orders, outbox, parcels, roostReports } from "./schema";
 
 // Invented roost reports on the invented models, marked demo (PRODUCT.md §8): enough houses
 // known through two summers on four models to show a rate, too few on the others to show
@@ -128,8 +128,25 @@ export async function seedDemoReportQuestion(db: Db, now = new Date()): Promise<
       .insert(orderLines)
       .values({ orderId: order!.id, modelId: model.id, slug: model.slug, name: model.name, unitPriceCents: model.priceCents, quantity: 2, billableLb: 21 })
       .returning();
+    await tx.insert(parcels).values(
+      [1, 2].map((n) => ({
+        orderId: order!.id,
+        description: `${model.name} (${n} of 2)`,
+        lengthIn: model.cartonLengthIn,
+        widthIn: model.cartonWidthIn,
+        heightIn: model.cartonHeightIn,
+        weightLb: model.cartonWeightLb,
+        billableLb: 21,
+        carrier: "usps" as const,
+        service: "Ground Advantage",
+        // Tracking numbers with valid check digits (USPS Publication 199 mod-10).
+        trackingNumber: n === 1 ? "9400111201080805483016" : "9400111201080805483023",
+        shippedAt: at(4, 28),
+      })),
+    );
     await tx.insert(orderEvents).values([
       { orderId: order!.id, fromStatus: "pending_payment", toStatus: "paid", note: "Payment received", createdAt: at(4, 20) },
+      { orderId: order!.id, fromStatus: "packed", toStatus: "shipped", note: "Marked shipped", createdAt: at(4, 28) },
       { orderId: order!.id, fromStatus: "shipped", toStatus: "delivered", note: "Marked delivered", createdAt: at(5, 2) },
     ]);
     await tx

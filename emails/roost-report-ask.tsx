@@ -58,7 +58,7 @@ export function RoostReportAskEmail({ org, name, seasonLabel, houses, orderUrl, 
         </Section>
       ))}
       <P>
-        To add a note or a photo, or to answer for another season,{" "}
+        To add a note or a photo,{" "}
         <Link href={orderUrl} style={styles.link}>
           open your order page
         </Link>

@@ -56,7 +56,8 @@ export function ReviewCard({ report }: { report: ReviewCardData }) {
     <article aria-labelledby={headingId} className="flex flex-col gap-3 rounded-xl border border-paper-300 bg-white p-5 shadow-card" data-testid="review-card">
       <div className="flex flex-wrap items-center gap-2">
         <h3 id={headingId} className="font-display text-lg font-semibold text-moss-900">
-          {report.modelName}, house {report.unit}: summer {report.seasonLabel}
+          {report.modelName}
+          {report.unit > 1 ? ` (house ${report.unit} of its order)` : ""}: summer {report.seasonLabel}
         </h3>
         <Badge tone={REVIEW_TONES[report.review]}>{REVIEW_WORDS[report.review]}</Badge>
         {report.demo ? <Badge tone="neutral">Demo</Badge> : null}
