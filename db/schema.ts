@@ -449,6 +449,70 @@ export const sites = pgTable(
   ],
 );
 
+// Roost reports (PRODUCT.md §8): did bats move into a house sold here? One current answer per
+// house (a unit of an order line) per season; a changed answer keeps the old row as history.
+export const roostAnswerEnum = pgEnum("roost_answer", ["no_sign", "signs", "bats_seen", "gone"]);
+export const roostCountBandEnum = pgEnum("roost_count_band", ["1-10", "11-50", "51-200", "over-200"]);
+export const roostReporterEnum = pgEnum("roost_reporter", ["account", "order_link", "email_link", "demo"]);
+export const roostReviewEnum = pgEnum("roost_review", ["new", "accepted", "doubtful", "follow_up"]);
+
+export const roostReports = pgTable(
+  "roost_reports",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    /** "<orderLineId>:<unit>" for a house sold here, "demo:<n>" for an invented one. */
+    houseKey: text("house_key").notNull(),
+    orderLineId: uuid("order_line_id").references(() => orderLines.id, { onDelete: "cascade" }),
+    unit: integer("unit").notNull(),
+    modelId: uuid("model_id")
+      .notNull()
+      .references(() => houseModels.id),
+    /** The year the season's maternity months start in (a southern season runs into the next year). */
+    season: integer("season").notNull(),
+    hemisphere: text("hemisphere").notNull(),
+    /** Which summer of the house this season is: 1 = its first; 0 = it went up too late in this one. */
+    summer: integer("summer").notNull(),
+    answer: roostAnswerEnum("answer").notNull(),
+    countBand: roostCountBandEnum("count_band"),
+    note: text("note").notNull().default(""),
+    photoKeyBase: text("photo_key_base"),
+    photoWidths: integer("photo_widths").array(),
+    /** The saved site that went with the order, by reference only; never copied. */
+    siteId: uuid("site_id"),
+    bandId: text("band_id"),
+    mount: text("mount"),
+    state: text("state"),
+    siteRating: text("site_rating"),
+    reporter: roostReporterEnum("reporter").notNull(),
+    reporterUserId: uuid("reporter_user_id").references(() => users.id, { onDelete: "set null" }),
+    /** SHA-256 of the order link or e-mail token used, so a report can be traced without keeping the token. */
+    reporterTokenHash: text("reporter_token_hash"),
+    current: boolean("current").notNull().default(true),
+    replacedAt: timestamp("replaced_at", { withTimezone: true, mode: "date" }),
+    review: roostReviewEnum("review").notNull().default("new"),
+    reviewReason: text("review_reason").notNull().default(""),
+    reviewedById: uuid("reviewed_by_id").references(() => users.id, { onDelete: "set null" }),
+    reviewedAt: timestamp("reviewed_at", { withTimezone: true, mode: "date" }),
+    demo: boolean("demo").notNull().default(false),
+    reportedAt: timestamp("reported_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex("roost_reports_current_key").on(t.houseKey, t.season).where(sql`${t.current}`),
+    index("roost_reports_model_idx").on(t.modelId),
+    index("roost_reports_review_idx").on(t.review, t.reportedAt),
+    index("roost_reports_line_idx").on(t.orderLineId),
+    check("roost_reports_unit", sql`${t.unit} between 1 and 10`),
+    check("roost_reports_summer", sql`${t.summer} >= 0`),
+    check("roost_reports_count_band", sql`${t.countBand} is null or ${t.answer} = 'bats_seen'`),
+  ],
+);
+
+/** Addresses that asked for no more end-of-season questions (one click, no sign-in). */
+export const roostAskOptOuts = pgTable("roost_ask_opt_outs", {
+  email: text("email").primaryKey(),
+  createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+});
+
 export type User = typeof users.$inferSelect;
 export type NewUser = typeof users.$inferInsert;
 export type HouseModelRow = typeof houseModels.$inferSelect;
@@ -461,3 +525,4 @@ export type RefundRow = typeof refunds.$inferSelect;
 export type SiteRow = typeof sites.$inferSelect;
 export type InspectionRow = typeof inspections.$inferSelect;
 export type StockMovementRow = typeof stockMovements.$inferSelect;
+export type RoostReportRow = typeof roostReports.$inferSelect;

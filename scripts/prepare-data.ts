@@ -9,12 +9,14 @@ import { importClimateIfEmpty } from "@/lib/catalog/climate-store";
 import { env } from "@/lib/config/env";
 import { seedDemo } from "@/lib/demo/commands";
 import { isEmpty } from "@/lib/demo/queries";
+import { seedDemoReportQuestion } from "@/lib/demo/roost-reports";
 
 const settings = env();
 const db = await getDb();
 if (await isEmpty(db)) {
   console.log("• Loading the demo scenario…");
   await seedDemo(db);
+  await seedDemoReportQuestion(db);
 }
 const imported = await importClimateIfEmpty(db, settings.NOAA_DIR);
 if (imported) console.log(`• Imported ${imported.stations} climate stations (${imported.skipped} lines skipped).`);

@@ -42,6 +42,9 @@ export default async function StaffHomePage() {
           <ButtonLink href="/staff/models/new" variant="secondary">
             List a new model
           </ButtonLink>
+          <ButtonLink href="/staff/roost-reports" variant="secondary">
+            Roost reports
+          </ButtonLink>
         </div>
       </PageHeader>
       <div className="grid gap-4 sm:grid-cols-3">

@@ -5,6 +5,7 @@ import type { HouseCard as HouseCardData } from "@/lib/catalog/house-card";
 import { drawingUrl, photoSrcSet, photoUrl } from "@/lib/catalog/photo-url";
 import { formatUsd } from "@/lib/checkout/money";
 import { FitBadge } from "./fit-badge";
+import { OccupancyMark } from "@/components/roost-reports/occupancy-mark";
 
 export function HouseCard({ house }: { house: HouseCardData }) {
   return (
@@ -51,6 +52,7 @@ export function HouseCard({ house }: { house: HouseCardData }) {
           {house.chamberCount} {house.chamberCount === 1 ? "chamber" : "chambers"} · {SHADE_LABELS[house.exteriorShade as Shade]}
           {house.vented ? " · vented" : ""}
         </p>
+        {house.occupancy ? <OccupancyMark occupancy={house.occupancy} /> : null}
         <div className="mt-auto flex items-baseline justify-between pt-2">
           <span className="font-display text-2xl font-semibold text-moss-900">{formatUsd(house.priceCents)}</span>
           <span className={house.stock > 0 ? "text-sm text-ink-soft" : "text-sm font-bold text-berry-700"}>

@@ -7,6 +7,7 @@ import type { PlacementAnswer } from "@/lib/placement/placement-answer";
 import type { RuleStatus } from "@/lib/placement/types";
 import { RuleList, STATUS_WORDS } from "./rule-list";
 import { SunOnHouse } from "./sun-on-house";
+import { RatingOutcome } from "@/components/roost-reports/rating-outcome";
 
 // Our own words for the overall rating: what it means for the buyer, in one line.
 const LABEL_LINES: Record<RuleStatus, string> = {
@@ -48,6 +49,7 @@ export function PlacementResult({ answer }: { answer: PlacementAnswer }) {
             : `${toChange} of ${answer.rules.length} rules suggest a change.`}{" "}
           Checked for {place}.
         </p>
+        <RatingOutcome label={answer.label} />
       </section>
 
       <section aria-labelledby="site-climate" className="flex flex-col gap-3">

@@ -7,6 +7,7 @@ export type Permission =
   | "staff:models"
   | "staff:stock"
   | "staff:inspections"
+  | "staff:roost-reports"
   | "fulfillment:orders"
   | "admin:users"
   | "admin:settings"
@@ -15,13 +16,14 @@ export type Permission =
 
 export const PERMISSIONS: Record<Role, readonly Permission[]> = {
   customer: ["account"],
-  staff: ["account", "staff:models", "staff:stock", "staff:inspections"],
+  staff: ["account", "staff:models", "staff:stock", "staff:inspections", "staff:roost-reports"],
   fulfillment: ["account", "fulfillment:orders"],
   admin: [
     "account",
     "staff:models",
     "staff:stock",
     "staff:inspections",
+    "staff:roost-reports",
     "fulfillment:orders",
     "admin:users",
     "admin:settings",

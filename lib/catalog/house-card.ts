@@ -16,6 +16,8 @@ export type HouseCard = {
   notes: number;
   photo: HouseSummary["photo"];
   fit?: { label: "good" | "fair" | "poor"; reasons: string[]; repaintTo?: string };
+  /** Roost reports (lib/roost-reports): houses reported, and the share with bats where n ≥ 5. */
+  occupancy?: { n: number; shown: boolean; k?: number; rate?: number; demo: boolean };
 };
 
 export function toHouseCard(h: HouseSummary): HouseCard {

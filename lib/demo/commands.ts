@@ -12,6 +12,7 @@ import {
 } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/passwords";
 import { DEMO_MODELS, DEMO_ORGANIZATION, DEMO_SHIPPING_RATES, DEMO_TAX_RATES, DEMO_USERS } from "./seed-data";
+import { seedDemoRoostReports } from "./roost-reports";
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 
@@ -89,4 +90,5 @@ export async function seedDemo(db: Db, now = new Date()): Promise<void> {
       }
     });
   }
+  await seedDemoRoostReports(db, now);
 }

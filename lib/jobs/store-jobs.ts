@@ -5,6 +5,7 @@ import { STORE_TIME_ZONE } from "@/lib/fulfillment/store-time";
 import { runMailDelivery } from "@/lib/mail/delivery-job";
 import { kickMailSender, MAIL_DELIVERY_JOB } from "@/lib/mail/kick";
 import { queueSeasonalReminders } from "@/lib/mail/seasonal-job";
+import { queueRoostReportMail } from "@/lib/roost-reports/season-job";
 import { registerJob } from "./registry";
 
 // Every background job of the store, in one list. To add one: write its handler in its domain
@@ -15,6 +16,7 @@ import { registerJob } from "./registry";
 export const RESERVATION_SWEEP_JOB = "reservations-expire";
 export const SEASONAL_REMINDERS_JOB = "mail-seasonal-reminders";
 export const REFUND_RETRY_JOB = "refunds-retry";
+export const ROOST_REPORT_MAIL_JOB = "roost-report-questions";
 
 // Unpaid reservations older than 30 minutes give their stock back; every minute, as before.
 registerJob(
@@ -68,6 +70,21 @@ registerJob(
   },
   {
     schedule: { cron: "0 8 * * *", tz: STORE_TIME_ZONE, catchUp: true },
+    retry: { limit: 6, delaySeconds: 60, backoff: true, maxDelaySeconds: 60 * 60 },
+    runOnStart: true,
+  },
+);
+
+// End-of-season roost-report questions and the second-summer advice: once a day at 9:00 store
+// time; one message per order per season (dedupe keys), so a second run is a no-op.
+registerJob(
+  ROOST_REPORT_MAIL_JOB,
+  async ({ now }) => {
+    const { asked, advised } = await queueRoostReportMail({ now });
+    if (asked + advised > 0) kickMailSender();
+  },
+  {
+    schedule: { cron: "0 9 * * *", tz: STORE_TIME_ZONE, catchUp: true },
     retry: { limit: 6, delaySeconds: 60, backoff: true, maxDelaySeconds: 60 * 60 },
     runOnStart: true,
   },

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { roostAdvicePayloadSchema, roostAskPayloadSchema } from "@/lib/roost-reports/mail-payloads";
 import { REMINDER_IDS } from "./seasons";
 
 // Every kind of message the store sends, with the payload its outbox row carries: the one list.
@@ -46,7 +47,7 @@ export const lowStockPayloadSchema = z.object({
 });
 
 /** Which composer renders a kind: order messages, the install guide, account messages. */
-export type MessageFamily = "order" | "guide" | "account";
+export type MessageFamily = "order" | "guide" | "account" | "roost";
 
 export const MESSAGE_KINDS = {
   "order-confirmation": { family: "order", payload: orderPayloadSchema },
@@ -61,6 +62,8 @@ export const MESSAGE_KINDS = {
   "year-end-statement": { family: "account", payload: yearEndPayloadSchema },
   "seasonal-reminder": { family: "account", payload: seasonalPayloadSchema },
   "low-stock": { family: "account", payload: lowStockPayloadSchema },
+  "roost-report-ask": { family: "roost", payload: roostAskPayloadSchema },
+  "roost-report-advice": { family: "roost", payload: roostAdvicePayloadSchema },
 } as const satisfies Record<string, { family: MessageFamily; payload: z.ZodType }>;
 
 export type MessageKind = keyof typeof MESSAGE_KINDS;

@@ -8,6 +8,7 @@ import { composeOrderMessage } from "./compose-order";
 import type { Composition } from "./composition";
 import { isMessageKind, MESSAGE_KINDS, PermanentMailError } from "./payloads";
 import { PLAIN_TEXT_OPTIONS } from "./plain-text";
+import { composeRoostReportMessage } from "@/lib/roost-reports/compose-mail";
 
 export type RenderedMessage = Omit<Composition, "element"> & { html: string; text: string };
 
@@ -27,6 +28,8 @@ function compose({
       return composeOrderMessage({ db, kind: row.kind, payload: row.payload });
     case "account":
       return composeAccountMessage({ db, kind: row.kind, payload: row.payload });
+    case "roost":
+      return composeRoostReportMessage({ db, kind: row.kind, payload: row.payload });
   }
 }
 

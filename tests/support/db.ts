@@ -2,6 +2,8 @@ import { sql } from "drizzle-orm";
 import { getDb, type Db } from "@/db/client";
 
 const TABLES = [
+  "roost_reports",
+  "roost_ask_opt_outs",
   "sign_in_attempts",
   "password_reset_tokens",
   "email_preferences",

@@ -12,6 +12,8 @@ import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { listOrdersForUser } from "@/lib/orders/queries";
 import { statusTone, statusWords } from "@/lib/orders/statuses";
 import { formatUsd } from "@/lib/checkout/money";
+import { HouseReportPanel } from "@/components/roost-reports/house-report-panel";
+import { listHouseQuestions } from "@/lib/roost-reports/queries";
 
 export const metadata: Metadata = { title: "My account" };
 
@@ -25,6 +27,7 @@ const LINKS = [
 export default async function AccountPage() {
   const user = await requirePageUser("account", "/account");
   const orders = (await listOrdersForUser({ userId: user.id })).filter((o) => o.status !== "expired");
+  const reportQuestions = await listHouseQuestions({ orderIds: orders.map((o) => o.id) });
   return (
     <PageShell>
       <PageHeader title={`Hello, ${user.name}`} lead="Your orders, gifts and saved sites live here." />
@@ -54,6 +57,9 @@ export default async function AccountPage() {
               ))}
             </ul>
           )}
+          <div className="mt-10">
+            <HouseReportPanel questions={reportQuestions} />
+          </div>
         </section>
         <div className="flex flex-col gap-6">
           <Card>

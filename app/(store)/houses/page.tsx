@@ -7,6 +7,7 @@ import { getBandChoice } from "@/lib/catalog/band-cookie-server";
 import { catalogQuerySchema, type CatalogQuery } from "@/lib/catalog/catalog-query";
 import { toHouseCard } from "@/lib/catalog/house-card";
 import { listHouses } from "@/lib/catalog/queries";
+import { withOccupancyMarks } from "@/lib/roost-reports/catalog-marks";
 
 export const metadata: Metadata = { title: "Houses" };
 
@@ -19,6 +20,7 @@ export default async function HousesPage({ searchParams }: { searchParams: Promi
     if (choice) query.band = choice.id;
   }
   const items = await listHouses(query);
+  const cards = await withOccupancyMarks(items.map(toHouseCard));
   return (
     <PageShell>
       <PageHeader
@@ -41,7 +43,7 @@ export default async function HousesPage({ searchParams }: { searchParams: Promi
           .
         </p>
       ) : null}
-      <CatalogBrowser initialQuery={query} initialResult={{ items: items.map(toHouseCard), total: items.length }} />
+      <CatalogBrowser initialQuery={query} initialResult={{ items: cards, total: items.length }} />
     </PageShell>
   );
 }

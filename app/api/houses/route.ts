@@ -2,6 +2,7 @@ import { catalogQuerySchema } from "@/lib/catalog/catalog-query";
 import { toHouseCard } from "@/lib/catalog/house-card";
 import { listHouses } from "@/lib/catalog/queries";
 import { parseQuery, route } from "@/lib/http/route";
+import { withOccupancyMarks } from "@/lib/roost-reports/catalog-marks";
 
 export const dynamic = "force-dynamic";
 
@@ -9,5 +10,5 @@ export const dynamic = "force-dynamic";
 export const GET = route({ public: true }, async ({ request }) => {
   const query = parseQuery(request, catalogQuerySchema);
   const items = await listHouses(query);
-  return { items: items.map(toHouseCard), total: items.length };
+  return { items: await withOccupancyMarks(items.map(toHouseCard)), total: items.length };
 });

@@ -14,6 +14,8 @@ import { drawingUrl, photoSrcSet, photoUrl } from "@/lib/catalog/photo-url";
 import { getHouseBySlug } from "@/lib/catalog/queries";
 import { formatUsd } from "@/lib/checkout/money";
 import { AddToCart } from "@/components/checkout/add-to-cart";
+import { OccupancyFigures } from "@/components/roost-reports/occupancy-figures";
+import { getModelOccupancy } from "@/lib/roost-reports/queries";
 
 type Props = { params: Promise<{ slug: string }> };
 
@@ -31,6 +33,7 @@ export default async function HousePage({ params }: Props) {
   if (!house) notFound();
   const band = choice ? CLIMATE_BANDS[choice.id] : null;
   const { certification } = house;
+  const occupancy = await getModelOccupancy({ modelId: house.id });
 
   return (
     <PageShell>
@@ -100,6 +103,9 @@ export default async function HousePage({ params }: Props) {
             </p>
           </section>
         </div>
+      </div>
+      <div className="mt-12">
+        <OccupancyFigures occupancy={occupancy} />
       </div>
       <section aria-labelledby="specs" className="mt-12">
         <h2 id="specs" className="font-display text-2xl font-semibold text-moss-900">

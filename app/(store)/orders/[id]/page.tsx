@@ -15,6 +15,8 @@ import { formatUsd } from "@/lib/checkout/money";
 import { AppError } from "@/lib/http/errors";
 import { OrderParcels } from "@/components/orders/order-parcels";
 import { OrderTimeline } from "@/components/orders/order-timeline";
+import { HouseReportPanel } from "@/components/roost-reports/house-report-panel";
+import { listReportQuestionsForViewer } from "@/lib/roost-reports/order-reports";
 
 export const metadata: Metadata = { title: "Your order" };
 
@@ -39,6 +41,7 @@ export default async function OrderPage({ params, searchParams }: Props) {
     throw error;
   }
   const lines = await getOrderLines({ orderId: order.id });
+  const reportQuestions = await listReportQuestionsForViewer({ order, token: t, user: await getSessionUser() });
   const words = statusWords(order.status);
   const linkSuffix = `?t=${encodeURIComponent(order.accessToken)}`;
   const giftOnly = lines.length === 0;
@@ -103,6 +106,7 @@ export default async function OrderPage({ params, searchParams }: Props) {
             </section>
           ) : null}
           {lines.length > 0 && order.paidAt ? <OrderParcels orderId={order.id} /> : null}
+          <HouseReportPanel questions={reportQuestions} accessToken={t} />
           <OrderTimeline orderId={order.id} />
         </div>
         <aside aria-labelledby="amounts" className="flex flex-col gap-4 self-start rounded-xl border border-paper-200 bg-white p-5">

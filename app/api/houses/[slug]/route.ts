@@ -3,6 +3,7 @@ import { BAND_IDS } from "@/lib/catalog/climate-bands";
 import { getHouseBySlug } from "@/lib/catalog/queries";
 import { AppError } from "@/lib/http/errors";
 import { parseQuery, route } from "@/lib/http/route";
+import { getModelOccupancy } from "@/lib/roost-reports/queries";
 
 export const dynamic = "force-dynamic";
 
@@ -27,5 +28,6 @@ export const GET = route<{ slug: string }>({ public: true }, async ({ request, p
     publishable: house.check.publishable,
     carton: house.carton,
     ...(house.fit ? { fit: house.fit } : {}),
+    occupancy: await getModelOccupancy({ modelId: house.id }),
   };
 });

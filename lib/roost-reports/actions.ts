@@ -1,0 +1,23 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { action } from "@/lib/http/action";
+import { reviewRoostReport } from "./commands";
+import { answerFromLink, stopFromLink } from "./link-answers";
+import { linkAnswerSchema, optOutSchema, reviewSchema } from "./report-input";
+
+/** The confirmation page's button: public, the signed token is the authority. */
+export const confirmLinkAnswerAction = action({ public: true }, linkAnswerSchema, async (input) => answerFromLink({ input }));
+
+export const stopRoostQuestionsAction = action({ public: true }, optOutSchema, async ({ token }) => {
+  const { email } = await stopFromLink({ token });
+  // Say which address, but only its first letter and domain: the page may be on a shared screen.
+  const [local = "", domain = ""] = email.split("@");
+  return { address: `${local.slice(0, 1)}…@${domain}` };
+});
+
+export const reviewRoostReportAction = action({ permission: "staff:roost-reports" }, reviewSchema, async (input, user) => {
+  const row = await reviewRoostReport({ input, actorId: user!.id });
+  revalidatePath("/staff/roost-reports");
+  return row;
+});

@@ -1,0 +1,164 @@
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import { getDb, type Tx } from "@/db/client";
+import { roostAskOptOuts, roostReports } from "@/db/schema";
+import { AppError } from "@/lib/http/errors";
+import { deleteImages, putImages } from "@/lib/uploads/object-store";
+import { prepareImage } from "@/lib/uploads/prepare-image";
+import { houseKeyFor, type CountBand, type RoostAnswer } from "./answers";
+import type { HouseLine } from "./house-context";
+import { newReportPhotoKeyBase } from "./photo-keys";
+import type { ReviewInput } from "./report-input";
+import { currentSeason, seasonLabel, summerNumber } from "./season-rules";
+
+export type Reporter =
+  | { kind: "account"; userId: string }
+  | { kind: "order_link"; tokenHash: string; userId: string | null }
+  | { kind: "email_link"; tokenHash: string };
+
+export type ReportOutcome = "recorded" | "changed" | "unchanged";
+
+type Photo = { keyBase: string; widths: number[] };
+
+/** The summer number a season is for this house, or a clear refusal. */
+export function checkReportableSeason({ line, season, now }: { line: HouseLine; season: number; now: Date }): number {
+  if (!line.deliveredAt)
+    throw new AppError("conflict", "This house has not arrived yet: you can tell us about it once it is delivered or picked up.", {
+      season: "The house has not arrived yet.",
+    });
+  const latest = currentSeason({ date: now, hemisphere: line.hemisphere });
+  const summer = summerNumber({ season, deliveredAt: line.deliveredAt, hemisphere: line.hemisphere });
+  if (season > latest || summer === null) {
+    const message = `The ${seasonLabel({ season, hemisphere: line.hemisphere })} season is not one this house has had yet.`;
+    throw new AppError("bad_request", message, { season: message });
+  }
+  return summer;
+}
+
+async function storePhoto(bytes: Uint8Array, fileName: string): Promise<Photo & { keys: string[] }> {
+  // The same checks as the workshop's photos: sniffed type, size, structure (no polyglots), a
+  // pixel limit, then a fresh WebP encode without the camera's metadata (GPS included).
+  const image = await prepareImage({ bytes, fileName });
+  const keyBase = newReportPhotoKeyBase();
+  const objects = image.renders.map((r) => ({ key: `${keyBase}-${r.width}.webp`, body: r.body }));
+  await putImages(objects);
+  return { keyBase, widths: image.renders.map((r) => r.width), keys: objects.map((o) => o.key) };
+}
+
+function isUniqueViolation(error: unknown): boolean {
+  const e = error as { code?: string; cause?: { code?: string } } | null;
+  return e?.code === "23505" || e?.cause?.code === "23505";
+}
+
+/**
+ * Records one answer about one house for one season. The same answer again changes nothing
+ * (a second click of the same link is harmless); a different answer, count, note or photo
+ * becomes the current report and the old one stays as history.
+ */
+export async function recordHouseReport({
+  line,
+  unit,
+  season,
+  answer,
+  countBand,
+  note = "",
+  mount,
+  photo,
+  reporter,
+  now = new Date(),
+}: {
+  line: HouseLine;
+  unit: number;
+  season: number;
+  answer: RoostAnswer;
+  countBand?: CountBand;
+  note?: string;
+  mount?: string;
+  photo?: { bytes: Uint8Array; fileName: string };
+  reporter: Reporter;
+  now?: Date;
+}): Promise<{ outcome: ReportOutcome; reportId: string }> {
+  if (!Number.isInteger(unit) || unit < 1 || unit > line.quantity) {
+    const message = `This order line has ${line.quantity} ${line.quantity === 1 ? "house" : "houses"}; choose one of them.`;
+    throw new AppError("bad_request", message, { unit: message });
+  }
+  const summer = checkReportableSeason({ line, season, now });
+  const stored = photo ? await storePhoto(photo.bytes, photo.fileName) : null;
+  const houseKey = houseKeyFor({ orderLineId: line.orderLineId, unit });
+  const write = async (tx: Tx) => {
+    const [existing] = await tx
+      .select()
+      .from(roostReports)
+      .where(and(eq(roostReports.houseKey, houseKey), eq(roostReports.season, season), eq(roostReports.current, true)));
+    const same = existing?.answer === answer;
+    const nextCount = answer === "bats_seen" ? (countBand ?? (same ? existing?.countBand : null) ?? null) : null;
+    const nextNote = note || (same ? (existing?.note ?? "") : "");
+    const nextMount = mount ?? existing?.mount ?? line.mount;
+    if (existing && same && !stored && nextCount === existing.countBand && nextNote === existing.note && nextMount === existing.mount) {
+      return { outcome: "unchanged" as const, reportId: existing.id };
+    }
+    if (existing) {
+      await tx.update(roostReports).set({ current: false, replacedAt: now }).where(eq(roostReports.id, existing.id));
+    }
+    const keepPhoto = same && existing?.photoKeyBase ? { keyBase: existing.photoKeyBase, widths: existing.photoWidths ?? [] } : null;
+    const usePhoto = stored ?? keepPhoto;
+    const [row] = await tx
+      .insert(roostReports)
+      .values({
+        houseKey,
+        orderLineId: line.orderLineId,
+        unit,
+        modelId: line.modelId,
+        season,
+        hemisphere: line.hemisphere,
+        summer,
+        answer,
+        countBand: nextCount,
+        note: nextNote,
+        photoKeyBase: usePhoto?.keyBase ?? null,
+        photoWidths: usePhoto?.widths ?? null,
+        siteId: line.siteId,
+        bandId: line.bandId,
+        mount: nextMount,
+        state: line.state,
+        siteRating: line.siteRating,
+        reporter: reporter.kind,
+        reporterUserId: reporter.kind === "email_link" ? null : reporter.userId,
+        reporterTokenHash: reporter.kind === "account" ? null : reporter.tokenHash,
+        reportedAt: now,
+      })
+      .returning({ id: roostReports.id });
+    return { outcome: existing ? ("changed" as const) : ("recorded" as const), reportId: row!.id };
+  };
+  const db = await getDb();
+  try {
+    try {
+      return await db.transaction(write);
+    } catch (error) {
+      // Two answers for the same house at the same instant: the later one goes on top.
+      if (!isUniqueViolation(error)) throw error;
+      return await db.transaction(write);
+    }
+  } catch (error) {
+    if (stored) await deleteImages(stored.keys).catch((e: unknown) => console.error("report photo cleanup:", e));
+    throw error;
+  }
+}
+
+/** A staff decision on a report: doubtful ones leave the figures, with the reason kept beside them. */
+export async function reviewRoostReport({ input, actorId, now = new Date() }: { input: ReviewInput; actorId: string; now?: Date }) {
+  const db = await getDb();
+  const [row] = await db
+    .update(roostReports)
+    .set({ review: input.decision, reviewReason: input.reason, reviewedById: actorId, reviewedAt: now })
+    .where(eq(roostReports.id, input.reportId))
+    .returning({ id: roostReports.id, review: roostReports.review });
+  if (!row) throw new AppError("not_found", "That report does not exist.");
+  return row;
+}
+
+/** No more end-of-season questions to this address; repeating it is harmless. */
+export async function optOutOfRoostQuestions({ email }: { email: string }): Promise<void> {
+  const db = await getDb();
+  await db.insert(roostAskOptOuts).values({ email: email.toLowerCase() }).onConflictDoNothing();
+}

@@ -1,0 +1,54 @@
+import { describe, expect, it } from "vitest";
+import {
+  signAnswerToken,
+  signOptOutToken,
+  TOKEN_LIFE_DAYS,
+  tokenFingerprint,
+  verifyAnswerToken,
+  verifyOptOutToken,
+} from "@/lib/roost-reports/report-tokens";
+
+const secret = "unit-test-secret-unit-test-secret-0123";
+const now = new Date("2026-09-02T10:00:00Z");
+const claims = { orderLineId: "4b1c4f1e-2d5a-4a6b-9f3e-1a2b3c4d5e6f", unit: 2, season: 2026, answer: "signs" as const };
+
+describe("roost report tokens", () => {
+  it("round-trips the house, season and answer", () => {
+    const token = signAnswerToken({ secret, claims, now });
+    expect(verifyAnswerToken({ secret, token, now })).toEqual({ ok: true, claims });
+  });
+
+  it("refuses a token with any field changed, or signed with another secret", () => {
+    const token = signAnswerToken({ secret, claims, now });
+    const [v, body, sig] = token.split(".");
+    const changed = JSON.parse(Buffer.from(body!, "base64url").toString());
+    changed.a = "bats_seen";
+    const tampered = `${v}.${Buffer.from(JSON.stringify(changed)).toString("base64url")}.${sig}`;
+    expect(verifyAnswerToken({ secret, token: tampered, now })).toEqual({ ok: false, reason: "forged" });
+    const other = signAnswerToken({ secret: "another-secret-another-secret-0123456", claims, now });
+    expect(verifyAnswerToken({ secret, token: other, now })).toEqual({ ok: false, reason: "forged" });
+    expect(verifyAnswerToken({ secret, token: `${token}x`, now }).ok).toBe(false);
+    expect(verifyAnswerToken({ secret, token: "r1.abc", now })).toEqual({ ok: false, reason: "malformed" });
+  });
+
+  it("refuses a token made for another purpose, both ways", () => {
+    const optOut = signOptOutToken({ secret, claims: { orderId: claims.orderLineId, email: "a@example.org" }, now });
+    expect(verifyAnswerToken({ secret, token: optOut, now })).toEqual({ ok: false, reason: "wrong-purpose" });
+    const answer = signAnswerToken({ secret, claims, now });
+    expect(verifyOptOutToken({ secret, token: answer, now })).toEqual({ ok: false, reason: "wrong-purpose" });
+    expect(verifyOptOutToken({ secret, token: optOut, now })).toMatchObject({ ok: true, claims: { email: "a@example.org" } });
+  });
+
+  it("expires after its life, the last instant excluded", () => {
+    const token = signAnswerToken({ secret, claims, now });
+    const end = new Date(Math.floor(now.getTime() / 1000) * 1000 + TOKEN_LIFE_DAYS * 86_400_000);
+    expect(verifyAnswerToken({ secret, token, now: new Date(end.getTime() - 1000) }).ok).toBe(true);
+    expect(verifyAnswerToken({ secret, token, now: end })).toEqual({ ok: false, reason: "expired" });
+  });
+
+  it("keeps a fingerprint, not the token", () => {
+    const token = signAnswerToken({ secret, claims, now });
+    expect(tokenFingerprint(token)).toMatch(/^[0-9a-f]{64}$/);
+    expect(tokenFingerprint(token)).not.toContain(token.slice(3, 20));
+  });
+});
