@@ -4,11 +4,26 @@
 // on the chart are tested without a browser. The panorama is centred on the equator side
 // (south in the north, north in the south), where the summer sun runs at midday.
 import { abbreviateBearing } from "@/lib/placement/bearing";
-import { SKYLINE_DIRECTIONS, SKYLINE_STEP_DEG, skylineElevationAt, type Skyline } from "@/lib/placement/skyline";
+import {
+  SKYLINE_DIRECTIONS,
+  SKYLINE_STEP_DEG,
+  skylineElevationAt,
+  type Skyline,
+} from "@/lib/placement/skyline";
 import type { SunPath, SunPathPoint } from "@/lib/placement/sun-path";
 
-/** A wide box with large type: on a 360 px phone it shrinks to about 0.55, so labels of 24 units read at 13 px. */
-export const SKYLINE_CHART_BOX = { width: 640, height: 340, left: 52, right: 14, top: 34, bottom: 48 };
+/**
+ * A wide box: on a 360 px phone it shrinks to about 0.55, so the chart's labels grow to 28–30
+ * units there (15–16 px) and stay at 20–22 units on wider screens.
+ */
+export const SKYLINE_CHART_BOX = {
+  width: 640,
+  height: 360,
+  left: 64,
+  right: 16,
+  top: 40,
+  bottom: 52,
+};
 
 export type SunState = "lit" | "hidden" | "behind-wall";
 
@@ -71,7 +86,12 @@ export function layoutSkylineChart({
   hemisphere: "north" | "south";
 }): SkylineChartLayout {
   const box = SKYLINE_CHART_BOX;
-  const plot = { left: box.left, right: box.width - box.right, top: box.top, bottom: box.height - box.bottom };
+  const plot = {
+    left: box.left,
+    right: box.width - box.right,
+    top: box.top,
+    bottom: box.height - box.bottom,
+  };
   const startAzimuth = hemisphere === "north" ? 0 : 180;
   const peak = Math.max(0, ...paths.solstice.points.map((p) => p.altitude), ...(skyline ?? [0]));
   const maxAltitude = Math.min(90, Math.max(30, Math.ceil(peak / 15) * 15));
@@ -109,7 +129,12 @@ export function layoutSkylineChart({
     // The sky behind the wall runs from facing + 90° to facing + 270°, cut where it wraps.
     const from = unwrap(facingDeg + 90);
     const to = from + 180;
-    for (const [a, b] of to <= 360 ? [[from, to]] : [[from, 360], [0, to - 360]]) {
+    for (const [a, b] of to <= 360
+      ? [[from, to]]
+      : [
+          [from, 360],
+          [0, to - 360],
+        ]) {
       behindWall.push({ x: x(a ?? 0), width: round(x(b ?? 0) - x(a ?? 0)) });
     }
   }
@@ -139,7 +164,9 @@ export function layoutSkylineChart({
 
 /** True when the path crosses the panorama's edge (the midnight sun far north). */
 function wraps(points: SunPathPoint[], unwrap: (az: number) => number): boolean {
-  return points.some((p, i) => i > 0 && Math.abs(unwrap(p.azimuth) - unwrap(points[i - 1]?.azimuth ?? 0)) > 180);
+  return points.some(
+    (p, i) => i > 0 && Math.abs(unwrap(p.azimuth) - unwrap(points[i - 1]?.azimuth ?? 0)) > 180,
+  );
 }
 
 /**
@@ -162,7 +189,8 @@ function splitRuns(
   let previous: SunPathPoint | null = null;
   for (const point of points) {
     const state = classify(point);
-    const jump = previous !== null && Math.abs(unwrap(point.azimuth) - unwrap(previous.azimuth)) > 180;
+    const jump =
+      previous !== null && Math.abs(unwrap(point.azimuth) - unwrap(previous.azimuth)) > 180;
     const last = runs.at(-1);
     if (last && last.state === state && !jump) {
       last.points.push(toXY(point));

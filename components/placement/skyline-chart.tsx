@@ -6,7 +6,12 @@ import { formatHours } from "@/lib/placement/format";
 import type { PlacementSun } from "@/lib/placement/placement-answer";
 import { skylineElevationAt } from "@/lib/placement/skyline";
 import { formatAboutMinutes } from "@/lib/placement/skyline-words";
-import { classifySun, layoutSkylineChart, SKYLINE_CHART_BOX, type PathRun } from "./skyline-chart-geometry";
+import {
+  classifySun,
+  layoutSkylineChart,
+  SKYLINE_CHART_BOX,
+  type PathRun,
+} from "./skyline-chart-geometry";
 
 type SkylineChartProps = {
   sun: PlacementSun;
@@ -18,7 +23,11 @@ type SkylineChartProps = {
 
 const HATCH = `repeating-linear-gradient(45deg, ${palette.bark[700]} 0 3px, ${palette.bark[200]} 3px 8px)`;
 
-const STATE_WORDS = { lit: "On the house", hidden: "Hidden by the skyline", "behind-wall": "Behind the wall" };
+const STATE_WORDS = {
+  lit: "On the house",
+  hidden: "Hidden by the skyline",
+  "behind-wall": "Behind the wall",
+};
 
 function Runs({ runs, strong }: { runs: PathRun[]; strong: boolean }) {
   return runs.map((run, i) => (
@@ -29,7 +38,9 @@ function Runs({ runs, strong }: { runs: PathRun[]; strong: boolean }) {
       strokeLinecap="round"
       strokeLinejoin="round"
       strokeWidth={run.state === "lit" ? (strong ? 4 : 3) : 2.5}
-      strokeDasharray={run.state === "hidden" ? "7 6" : run.state === "behind-wall" ? "2 6" : undefined}
+      strokeDasharray={
+        run.state === "hidden" ? "7 6" : run.state === "behind-wall" ? "2 6" : undefined
+      }
       className={
         run.state === "lit"
           ? strong
@@ -49,7 +60,12 @@ function Runs({ runs, strong }: { runs: PathRun[]; strong: boolean }) {
  * the house's facing marked, and for a wall the sky behind it greyed. Described in words for
  * screen readers and backed by an hour-by-hour table.
  */
-export function SkylineChart({ sun, hemisphere, solsticeLabel, seasonLowLabel }: SkylineChartProps) {
+export function SkylineChart({
+  sun,
+  hemisphere,
+  solsticeLabel,
+  seasonLowLabel,
+}: SkylineChartProps) {
   const id = useId().replace(/:/g, "");
   const skyline = sun.skyline.profile;
   const wall = sun.exposure === "front";
@@ -72,6 +88,8 @@ export function SkylineChart({ sun, hemisphere, solsticeLabel, seasonLowLabel }:
     `${sun.seasonLabel}, mean: ${formatHours(sun.house.hours)} of sun on the house a day. The table below gives every hour.`,
   ].join(" ");
 
+  // The label for the sky behind a wall goes in the wider of its two pieces.
+  const widest = [...layout.behindWall].sort((a, b) => b.width - a.width)[0];
   const hours = sun.paths.solstice.points.filter((p) => p.minute % 60 === 0 && p.altitude > 0);
 
   return (
@@ -88,43 +106,81 @@ export function SkylineChart({ sun, hemisphere, solsticeLabel, seasonLowLabel }:
       <svg
         viewBox={`0 0 ${SKYLINE_CHART_BOX.width} ${SKYLINE_CHART_BOX.height}`}
         role="img"
-        aria-labelledby={`${id}-title ${id}-desc`}
+        aria-labelledby={`${id}-title`}
+        aria-describedby={`${id}-desc`}
         className="h-auto w-full"
       >
         <title id={`${id}-title`}>The sun&apos;s path over your skyline</title>
         <desc id={`${id}-desc`}>{description}</desc>
         <defs>
           <clipPath id={`${id}-plot`}>
-            <rect x={plot.left} y={plot.top - 10} width={plot.right - plot.left} height={plot.bottom - plot.top + 10} />
+            <rect
+              x={plot.left}
+              y={plot.top - 10}
+              width={plot.right - plot.left}
+              height={plot.bottom - plot.top + 10}
+            />
           </clipPath>
           {layout.skylineArea ? (
             <clipPath id={`${id}-skyline`}>
               <path d={layout.skylineArea} />
             </clipPath>
           ) : null}
-          <pattern id={`${id}-hatch`} width={8} height={8} patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
+          <pattern
+            id={`${id}-hatch`}
+            width={8}
+            height={8}
+            patternUnits="userSpaceOnUse"
+            patternTransform="rotate(45)"
+          >
             <rect width={8} height={8} className="fill-bark-200" />
             <line x1={0} y1={0} x2={0} y2={8} className="stroke-bark-700" strokeWidth={3} />
           </pattern>
         </defs>
-        <rect x={plot.left} y={plot.top} width={plot.right - plot.left} height={plot.bottom - plot.top} className="fill-dusk-50" />
+        <rect
+          x={plot.left}
+          y={plot.top}
+          width={plot.right - plot.left}
+          height={plot.bottom - plot.top}
+          className="fill-dusk-50"
+        />
         {layout.behindWall.map((r) => (
-          <rect key={r.x} x={r.x} y={plot.top} width={r.width} height={plot.bottom - plot.top} className="fill-paper-300" />
+          <rect
+            key={r.x}
+            x={r.x}
+            y={plot.top}
+            width={r.width}
+            height={plot.bottom - plot.top}
+            className="fill-paper-300"
+          />
         ))}
-        {layout.behindWall[0] ? (
+        {widest && widest.width > 120 ? (
           <text
-            x={(layout.behindWall.at(-1)?.x ?? 0) + (layout.behindWall.at(-1)?.width ?? 0) / 2}
-            y={plot.top + 24}
+            x={widest.x + widest.width / 2}
+            y={plot.top + 30}
             textAnchor="middle"
-            className="fill-ink-soft text-[20px]"
+            className="fill-ink-soft text-[20px] max-sm:text-[26px]"
           >
             behind the wall
           </text>
         ) : null}
         {layout.yTicks.map((t) => (
           <g key={t.label}>
-            <line x1={plot.left} x2={plot.right} y1={t.y} y2={t.y} className="stroke-dusk-200" strokeWidth={1} />
-            <text x={plot.left - 6} y={t.y} textAnchor="end" dominantBaseline="central" className="fill-ink-soft text-[20px]">
+            <line
+              x1={plot.left}
+              x2={plot.right}
+              y1={t.y}
+              y2={t.y}
+              className="stroke-dusk-200"
+              strokeWidth={1}
+            />
+            <text
+              x={plot.left - 6}
+              y={t.y}
+              textAnchor="end"
+              dominantBaseline="central"
+              className="fill-ink-soft text-[20px] max-sm:text-[28px]"
+            >
               {t.label}
             </text>
           </g>
@@ -137,26 +193,65 @@ export function SkylineChart({ sun, hemisphere, solsticeLabel, seasonLowLabel }:
               {layout.band ? (
                 <path d={layout.band} fill={`url(#${id}-hatch)`} clipPath={`url(#${id}-skyline)`} />
               ) : null}
-              <path d={layout.skylineLine} fill="none" className="stroke-moss-700" strokeWidth={2.5} strokeLinejoin="round" />
+              <path
+                d={layout.skylineLine}
+                fill="none"
+                className="stroke-moss-700"
+                strokeWidth={2.5}
+                strokeLinejoin="round"
+              />
             </>
           ) : null}
           <Runs runs={layout.seasonLowRuns} strong={false} />
           <Runs runs={layout.solsticeRuns} strong />
         </g>
-        <line x1={layout.facing.x} x2={layout.facing.x} y1={plot.top} y2={plot.bottom} className="stroke-dusk-700" strokeWidth={2} strokeDasharray="4 4" />
+        <line
+          x1={layout.facing.x}
+          x2={layout.facing.x}
+          y1={plot.top}
+          y2={plot.bottom}
+          className="stroke-dusk-700"
+          strokeWidth={2}
+          strokeDasharray="4 4"
+        />
         <text
           x={layout.facing.x}
           y={plot.top - 10}
-          textAnchor={layout.facing.x < plot.left + 50 ? "start" : layout.facing.x > plot.right - 50 ? "end" : "middle"}
-          className="fill-dusk-700 text-[20px] font-bold"
+          textAnchor={
+            layout.facing.x < plot.left + 50
+              ? "start"
+              : layout.facing.x > plot.right - 50
+                ? "end"
+                : "middle"
+          }
+          className="fill-dusk-700 text-[20px] font-bold max-sm:text-[28px]"
         >
           house {layout.facing.label}
         </text>
-        <line x1={plot.left} x2={plot.right} y1={plot.bottom} y2={plot.bottom} className="stroke-bark-600" strokeWidth={2} />
+        <line
+          x1={plot.left}
+          x2={plot.right}
+          y1={plot.bottom}
+          y2={plot.bottom}
+          className="stroke-bark-600"
+          strokeWidth={2}
+        />
         {layout.xTicks.map((t, i) => (
           <g key={`${t.label}-${i}`}>
-            <line x1={t.x} x2={t.x} y1={plot.bottom} y2={plot.bottom + 6} className="stroke-bark-600" strokeWidth={2} />
-            <text x={t.x} y={plot.bottom + 30} textAnchor="middle" className="fill-ink text-[22px] font-bold">
+            <line
+              x1={t.x}
+              x2={t.x}
+              y1={plot.bottom}
+              y2={plot.bottom + 6}
+              className="stroke-bark-600"
+              strokeWidth={2}
+            />
+            <text
+              x={t.x}
+              y={plot.bottom + 34}
+              textAnchor="middle"
+              className="fill-ink text-[22px] font-bold max-sm:text-[30px]"
+            >
               {t.label}
             </text>
           </g>
@@ -168,13 +263,19 @@ export function SkylineChart({ sun, hemisphere, solsticeLabel, seasonLowLabel }:
           Sun on {solsticeLabel}: {formatHours(sun.house.solsticeHours)} on the house
         </li>
         <li className="flex items-center gap-2">
-          <span className="inline-block h-3.5 w-6 rounded-sm bg-ember-100 ring-1 ring-ember-600" aria-hidden="true" />
+          <span
+            className="inline-block h-3.5 w-6 rounded-sm bg-ember-100 ring-1 ring-ember-600"
+            aria-hidden="true"
+          />
           The season&apos;s paths, down to {seasonLowLabel}
         </li>
         {skyline ? (
           <>
             <li className="flex items-center gap-2">
-              <span className="inline-block h-3.5 w-6 rounded-sm bg-moss-200 ring-1 ring-moss-700" aria-hidden="true" />
+              <span
+                className="inline-block h-3.5 w-6 rounded-sm bg-moss-200 ring-1 ring-moss-700"
+                aria-hidden="true"
+              />
               Your skyline
             </li>
             <li className="flex items-center gap-2">
@@ -198,15 +299,18 @@ export function SkylineChart({ sun, hemisphere, solsticeLabel, seasonLowLabel }:
         <summary className="cursor-pointer font-bold text-moss-800 underline underline-offset-4">
           The same figures as a table
         </summary>
-        <Table caption={`Where the sun stands each solar hour on ${solsticeLabel}, and the minutes it reaches the house`} wrapperClassName="mt-3">
+        <Table
+          caption={`Where the sun stands each solar hour on ${solsticeLabel}, and the minutes it reaches the house`}
+          wrapperClassName="mt-3"
+        >
           <THead>
             <Tr>
               <Th>Solar time</Th>
-              <Th>Sun on {solsticeLabel}</Th>
+              <Th>Sun</Th>
               <Th numeric>Skyline there</Th>
               <Th>Reaches the house?</Th>
-              <Th numeric>Minutes on the house that hour, {solsticeLabel}</Th>
-              <Th numeric>Minutes, {sun.seasonLabel} mean</Th>
+              <Th numeric>On the house, {solsticeLabel}</Th>
+              <Th numeric>On the house, {sun.seasonLabel} mean</Th>
             </Tr>
           </THead>
           <TBody>
@@ -217,9 +321,12 @@ export function SkylineChart({ sun, hemisphere, solsticeLabel, seasonLowLabel }:
                 <Tr key={p.minute}>
                   <Td>{String(hour).padStart(2, "0")}:00</Td>
                   <Td>
-                    {abbreviateBearing(p.azimuth)} ({Math.round(p.azimuth)}°), {Math.round(p.altitude)}° up
+                    {abbreviateBearing(p.azimuth)} ({Math.round(p.azimuth)}°),{" "}
+                    {Math.round(p.altitude)}° up
                   </Td>
-                  <Td numeric>{skyline ? `${Math.round(skylineElevationAt(skyline, p.azimuth))}°` : "open"}</Td>
+                  <Td numeric>
+                    {skyline ? `${Math.round(skylineElevationAt(skyline, p.azimuth))}°` : "open"}
+                  </Td>
                   <Td>{STATE_WORDS[state]}</Td>
                   <Td numeric>{Math.round(sun.byHour.solsticeHouse[hour] ?? 0)} min</Td>
                   <Td numeric>{Math.round(sun.byHour.seasonHouse[hour] ?? 0)} min</Td>

@@ -85,7 +85,10 @@ export function SkylineFields({ describes, onDescribesChange }: SkylineFieldsPro
             </p>
             <SkylineGrid hintId={`${id}-hint`} errorId={error ? `${id}-error` : undefined} />
             {error ? (
-              <p id={`${id}-error`} className="flex items-start gap-1.5 text-sm font-bold text-berry-700">
+              <p
+                id={`${id}-error`}
+                className="flex items-start gap-1.5 text-sm font-bold text-berry-700"
+              >
                 <ToneIcon tone="poor" className="mt-px size-4" />
                 <span>{error}</span>
               </p>

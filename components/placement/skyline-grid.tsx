@@ -25,7 +25,10 @@ export function SkylineGrid({ hintId, errorId }: { hintId: string; errorId?: str
   const values = useWatch({ control, name: "skyline" });
 
   return (
-    <div className="grid grid-cols-4 gap-x-3 gap-y-2 sm:grid-cols-8 lg:grid-cols-4" aria-describedby={hintId}>
+    <div
+      className="grid grid-cols-4 gap-x-3 gap-y-2 sm:grid-cols-8 lg:grid-cols-4"
+      aria-describedby={hintId}
+    >
       {DIRECTIONS.map((k) => {
         const value = values?.[k];
         const invalid = errorId !== undefined && outOfRange(value);

@@ -56,7 +56,10 @@ export function SkylineMeasure({ onRecord }: { onRecord: (index: number, angle: 
         ? (window.DeviceOrientationEvent as PermissionedOrientation)
         : undefined;
     if (!Orientation) {
-      setState({ kind: "unavailable", reason: "This browser does not share a compass or tilt sensor." });
+      setState({
+        kind: "unavailable",
+        reason: "This browser does not share a compass or tilt sensor.",
+      });
       return;
     }
     setState({ kind: "starting" });
@@ -119,8 +122,8 @@ export function SkylineMeasure({ onRecord }: { onRecord: (index: number, angle: 
       <p className="text-sm text-ink-soft" id={`${id}-how`}>
         On a phone: stand at the foot of the pole or wall (no need to climb), hold the phone flat,
         screen up, and sight along its top edge. Tilt it up until the edge meets the tops of the
-        trees or roofs, then record that direction. Compass readings are magnetic, a little off
-        true north in most places; within one box of the grid that matters little.
+        trees or roofs, then record that direction. Compass readings are magnetic, a little off true
+        north in most places; within one box of the grid that matters little.
       </p>
       {state.kind === "idle" || state.kind === "unavailable" ? (
         <div>
@@ -129,7 +132,9 @@ export function SkylineMeasure({ onRecord }: { onRecord: (index: number, angle: 
           </Button>
         </div>
       ) : null}
-      {state.kind === "starting" ? <p className="text-sm">Waiting for the phone&apos;s sensors…</p> : null}
+      {state.kind === "starting" ? (
+        <p className="text-sm">Waiting for the phone&apos;s sensors…</p>
+      ) : null}
       {live ? (
         <div className="flex flex-col gap-3">
           <p className="text-lg font-bold tabular-nums">
@@ -143,7 +148,11 @@ export function SkylineMeasure({ onRecord }: { onRecord: (index: number, angle: 
               <label htmlFor={`${id}-dir`} className="text-sm font-bold">
                 No compass here: which way are you pointing?
               </label>
-              <Select id={`${id}-dir`} value={manualIndex} onChange={(e) => setManualIndex(Number(e.target.value))}>
+              <Select
+                id={`${id}-dir`}
+                value={manualIndex}
+                onChange={(e) => setManualIndex(Number(e.target.value))}
+              >
                 {Array.from({ length: SKYLINE_DIRECTIONS }, (_, k) => (
                   <option key={k} value={k}>
                     {skylineDirectionName(k)}

@@ -35,7 +35,7 @@ export function SkylinePresetsPicker({ onApply }: SkylinePresetsPickerProps) {
   return (
     <div className="flex flex-col gap-2 rounded-xl border border-paper-300 bg-paper-50 p-3">
       <div className="flex flex-wrap items-end gap-3">
-        <div className="flex min-w-48 flex-1 flex-col gap-1">
+        <div className="flex w-full flex-col gap-1">
           <label htmlFor={`${id}-preset`} className="text-sm font-bold text-ink">
             What the site looks like
           </label>
@@ -53,11 +53,15 @@ export function SkylinePresetsPicker({ onApply }: SkylinePresetsPickerProps) {
           </Select>
         </div>
         {preset?.sided ? (
-          <div className="flex min-w-36 flex-col gap-1">
+          <div className="flex min-w-36 flex-1 flex-col gap-1">
             <label htmlFor={`${id}-side`} className="text-sm font-bold text-ink">
               On which side
             </label>
-            <Select id={`${id}-side`} value={side} onChange={(e) => setSide(Number(e.target.value))}>
+            <Select
+              id={`${id}-side`}
+              value={side}
+              onChange={(e) => setSide(Number(e.target.value))}
+            >
               {PRESET_SIDES.map((s) => (
                 <option key={s.index} value={s.index}>
                   {s.label}

@@ -25,7 +25,8 @@ export function formatDay(date: string): string {
 }
 
 const HOW_COUNTED = {
-  building: "On a wall the house gets sun only while the sun is in front of the wall, so its sun is the front face's.",
+  building:
+    "On a wall the house gets sun only while the sun is in front of the wall, so its sun is the front face's.",
   pole: "On a pole the house is lit from the front, the sides or the back whenever the sun is up.",
   tree: "On a tree we count the sun as for a pole, under your skyline; the tree's own trunk and leaves shade it more than that.",
 } as const;
@@ -45,7 +46,8 @@ export function SunOnHouse({ answer }: { answer: PlacementAnswer }) {
       <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-[auto_1fr]" data-testid="sun-figures">
         <dt className="font-bold">On the house, {sun.seasonLabel} mean</dt>
         <dd data-testid="house-hours">
-          {formatHours(sun.house.hours)} a day, {formatPercent(sun.house.morningShare)} before solar noon
+          {formatHours(sun.house.hours)} a day, {formatPercent(sun.house.morningShare)} before solar
+          noon
         </dd>
         <dt className="font-bold">On the front face</dt>
         <dd>

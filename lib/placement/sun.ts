@@ -141,6 +141,9 @@ export function sunOnHouseForDay({
   const cosFacing = Math.cos(facing);
   // The profile in radians, or null for open sky (then the horizon test alone decides).
   const profile = isOpenSky(skyline) ? null : (skyline as Skyline).map((deg) => deg * RAD);
+  // Above the skyline's highest point the sun clears it in every direction: no lookup needed
+  // (the true altitude is compared, which only errs toward doing the lookup).
+  const sinClearsAll = profile ? Math.sin(Math.max(...profile)) : -1;
   const sun = traceSunMinutes({ lat, lon, startMs: noonMs - HALF_DAY_MINUTES * MINUTE_MS });
 
   const houseByHour = new Array<number>(24).fill(0);
@@ -166,7 +169,7 @@ export function sunOnHouseForDay({
     if (azimuth < 0) azimuth += 360;
 
     let visible = true;
-    if (profile) {
+    if (profile && sinAltitude <= sinClearsAll) {
       const x = azimuth / SKYLINE_STEP_DEG;
       const k = Math.floor(x) % SKYLINE_DIRECTIONS;
       const a = profile[k] ?? 0;

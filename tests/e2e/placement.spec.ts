@@ -36,15 +36,15 @@ test("a guest checks a site, fixes a poor rule, saves it, buys, and the install 
     "What to change: Mount the house on a pole or on a building wall instead.",
   );
   await expect(page.getByText(/Very hot summers/).first()).toBeVisible();
-  await expect(page.getByText("Trees and buildings are not modelled")).toBeVisible();
+  await expect(page.getByText("Open sky assumed")).toBeVisible();
 
   // The chart, and its table of the same figures.
-  const chart = page.getByRole("img", { name: /Sun on the house face, hour by hour/ });
+  const chart = page.getByRole("img", { name: /The sun's path over your skyline/ });
   await expect(chart).toBeVisible();
-  await expect(chart).toHaveAccessibleName(/May to August mean: \d+ h/);
+  await expect(chart).toHaveAccessibleDescription(/May to August, mean: \d+ h/);
   await page.getByText("The same figures as a table").click();
   await expect(
-    page.getByRole("table", { name: "Minutes of direct sun on the face, by solar hour" }),
+    page.getByRole("table", { name: /Where the sun stands each solar hour/ }),
   ).toBeVisible();
 
   // The compass dial answers the keyboard: 5° a press, 15° with Shift, Home for north.
@@ -123,7 +123,11 @@ test("a guest checks a site, fixes a poor rule, saves it, buys, and the install 
         };
         return data
           .filter((m) => m.to.some((to) => to.includes("marisol.site@example.org")))
-          .some((m) => `${m.text ?? ""} ${m.html ?? ""}`.includes("Pole by the pond"));
+          .some((m) => {
+            const body = `${m.text ?? ""} ${m.html ?? ""}`;
+            // The guide carries the site's skyline in words: here none was given.
+            return body.includes("Pole by the pond") && body.includes("An open sky was assumed");
+          });
       },
       { timeout: 45_000, intervals: [1_000] },
     )
@@ -191,4 +195,85 @@ test("a signed-in buyer keeps sites in the account, opens one and deletes it", a
   await dialog.getByRole("button", { name: "Delete site" }).click();
   await expect(dialog).toBeHidden();
   await expect(page.getByRole("heading", { name, exact: true })).toHaveCount(0);
+});
+
+/** "15 h 10 min a day, …" → 15.17 */
+async function readHouseHours(page: Page): Promise<number> {
+  const text = (await page.getByTestId("house-hours").textContent()) ?? "";
+  const match = /^(\d+) h(?: (\d+) min)?/.exec(text.trim());
+  if (!match) throw new Error(`no hours in "${text}"`);
+  return Number(match[1]) + Number(match[2] ?? 0) / 60;
+}
+
+test("the skyline: typed with the keyboard alone, then a preset; the chart and the result follow", async ({
+  page,
+}) => {
+  await page.goto("/placement");
+  // Seattle, a pole facing 160° (the default bearing): well above 10 h under an open sky.
+  await page.getByLabel("ZIP code", { exact: true }).fill("98101");
+  await page.getByLabel("Height above ground (ft)").fill("16");
+  await page.getByLabel("Distance to water (mi)").fill("0.2");
+  await page.getByLabel("Distance to the nearest trees (ft)").fill("30");
+  await expect(rating(page)).toBeVisible();
+  await expect(page.getByTestId("skyline-effect")).toContainText("An open sky was assumed");
+  const openSky = await readHouseHours(page);
+  expect(openSky).toBeGreaterThan(14);
+  await expect(rule(page, "P4")).toHaveAttribute("data-status", "good");
+
+  // Keyboard only: choose to describe the skyline, then type 20° into each of the 16 boxes.
+  await page.getByRole("radio", { name: "Leave it out (we assume open sky)" }).focus();
+  await page.keyboard.press("ArrowDown");
+  await expect(page.getByRole("radio", { name: "Describe the skyline" })).toBeChecked();
+  await page.getByLabel("Skyline toward the north, degrees").focus();
+  for (let k = 0; k < 16; k++) {
+    await page.keyboard.press("ControlOrMeta+A");
+    await page.keyboard.type("20");
+    if (k < 15) await page.keyboard.press("Tab");
+  }
+  await expect(page.getByLabel("Skyline toward the north-northwest, degrees")).toHaveValue("20");
+  await expect(page.getByTestId("skyline-effect")).toContainText(
+    "The skyline you described takes about",
+  );
+  await expect.poll(() => readHouseHours(page)).toBeLessThanOrEqual(openSky - 2);
+  const uniform = await readHouseHours(page);
+  const chart = page.getByRole("img", { name: /The sun's path over your skyline/ });
+  await expect(chart).toHaveAccessibleDescription(/hides the sun for about \d+ h/);
+
+  // A bad angle is refused beside the grid, naming the direction.
+  await page.getByLabel("Skyline toward the east, degrees").fill("95");
+  await page.getByRole("button", { name: "Check this site" }).click();
+  await expect(
+    page.getByText("The angle toward the east must be between 0° (open sky) and 90°."),
+  ).toBeVisible();
+  await page.getByLabel("Skyline toward the east, degrees").fill("20");
+
+  // A preset, picked and applied from the keyboard.
+  await page
+    .getByLabel("What the site looks like")
+    .selectOption({ label: "A clearing in the woods" });
+  await page.getByRole("button", { name: "Use this skyline" }).focus();
+  await page.keyboard.press("Enter");
+  await expect(page.getByText("Skyline filled in: A clearing in the woods.")).toBeVisible();
+  await expect(page.getByLabel("Skyline toward the north, degrees")).toHaveValue("25");
+  await expect.poll(() => readHouseHours(page)).toBeLessThan(uniform);
+  await expect(page.getByTestId("skyline-effect")).toContainText(/to the (east|west) take about/);
+  await page.getByText("The same figures as a table").click();
+  await expect(page.getByRole("cell", { name: "Hidden by the skyline" }).first()).toBeVisible();
+  await expectAccessible(page);
+
+  // The same spot on a wall: the face figure, and the advice to use a pole.
+  await page.getByRole("radio", { name: "Leave it out (we assume open sky)" }).check();
+  await page.getByRole("radio", { name: "Building wall" }).check();
+  await expect(rule(page, "P4")).toHaveAttribute("data-status", "fair");
+  await expect(rule(page, "P4")).toContainText("A pole in the open gets more sun than any wall");
+  const wall = await readHouseHours(page);
+  expect(wall).toBeGreaterThan(9.5);
+  expect(wall).toBeLessThan(9.9);
+
+  // The phone button says plainly when this browser shares no sensors.
+  await page.getByRole("radio", { name: "Describe the skyline" }).check();
+  await page.getByRole("button", { name: "Measure with this phone" }).click();
+  await expect(page.getByText("The phone's sensors are not available here")).toBeVisible({
+    timeout: 10_000,
+  });
 });

@@ -79,10 +79,12 @@ describe("POST /api/placement", () => {
       "2026-08-01",
       "2026-08-15",
     ]);
-    const mean = answer.sun.byDate.reduce((s: number, d: { hours: number }) => s + d.hours, 0) / 8;
-    expect(answer.sun.seasonMeanHours).toBeCloseTo(mean, 10);
-    expect(answer.sun.solstice.date).toBe("2026-06-21");
-    expect(answer.sun.seasonByHour).toHaveLength(24);
+    const mean =
+      answer.sun.byDate.reduce((s: number, d: { houseHours: number }) => s + d.houseHours, 0) / 8;
+    expect(answer.sun.house.hours).toBeCloseTo(mean, 10);
+    expect(answer.sun.solsticeDate).toBe("2026-06-21");
+    expect(answer.sun.byHour.seasonHouse).toHaveLength(24);
+    expect(answer.sun.paths.solstice.points.length).toBeGreaterThan(50);
     expect(answer.rules.map((r: { id: string }) => r.id)).toEqual([
       "P1",
       "P2",
@@ -101,7 +103,10 @@ describe("POST /api/placement", () => {
       change: expect.stringMatching(/pole or on a building/),
     });
     expect(answer.label).toBe("poor");
-    expect(answer.notModelled).toMatch(/trees, buildings and hills .* are not modelled/);
+    expect(answer.sun.skyline).toMatchObject({ profile: null, parts: [] });
+    expect(answer.sun.skyline.summary).toMatch(
+      /open sky was assumed: trees and buildings .* not counted/,
+    );
 
     const fixed = await (await check(siteInput({ zip: "80302", mount: "pole" }))).json();
     expect(fixed.rules[0].status).toBe("good");
@@ -138,7 +143,7 @@ describe("POST /api/placement", () => {
     const answer = await (await check(siteInput(sydney))).json();
     expect(answer.location.hemisphere).toBe("south");
     expect(answer.sun.seasonLabel).toBe("November to February");
-    expect(answer.sun.solstice.date).toBe("2025-12-21");
+    expect(answer.sun.solsticeDate).toBe("2025-12-21");
     expect(answer.rules[2]).toMatchObject({ id: "P3", status: "good" });
   });
 
@@ -151,12 +156,61 @@ describe("POST /api/placement", () => {
     ["a ZIP with no centre", { zip: "00000" }, "zip", /no map centre/],
     ["a mount we do not know", { mount: "fence" }, "mount", /pole, a building wall or a tree/],
     ["a yes/no given as text", { stacked: "no" }, "stacked", /Answer yes or no/],
+    ["a skyline of 15 angles", { skyline: new Array(15).fill(0) }, "skyline", /exactly 16 angles/],
+    [
+      "a skyline angle of 91°",
+      { skyline: [91, ...new Array(15).fill(0)] },
+      "skyline",
+      /north must be between 0°/,
+    ],
+    [
+      "a skyline angle as text",
+      { skyline: [...new Array(4).fill(0), "20", ...new Array(11).fill(0)] },
+      "skyline",
+      /east must be a number/,
+    ],
+    ["a skyline that is not a list", { skyline: "open" }, "skyline", /16 angles in degrees/],
   ])("refuses %s with 400 and the field", async (_name, change, field, message) => {
     const res = await check(siteInput(change));
     expect(res.status).toBe(400);
     const body = await res.json();
     expect(body.error.code).toBe("bad_request");
     expect(body.error.fields[field]).toMatch(message);
+  });
+
+  it("Seattle 98101 facing 160°: a pole gets well above 10 h and is good; a wall keeps the face figure", async () => {
+    const pole = await (await check(siteInput({ zip: "98101", mount: "pole" }))).json();
+    expect(pole.band.id).toBe("cool");
+    expect(pole.climate.julyHighF).toBeLessThanOrEqual(80);
+    expect(pole.sun.house.hours).toBeGreaterThan(14.5);
+    expect(pole.rules[3]).toMatchObject({ id: "P4", status: "good" });
+    const wall = await (await check(siteInput({ zip: "98101", mount: "building" }))).json();
+    expect(wall.sun.house.hours).toBe(pole.sun.face.hours);
+    expect(wall.sun.house.hours).toBeGreaterThan(9.6);
+    expect(wall.sun.house.hours).toBeLessThan(9.8);
+    expect(wall.rules[3]).toMatchObject({
+      id: "P4",
+      status: "fair",
+      change: expect.stringMatching(/A pole in the open gets more sun than any wall/),
+    });
+  });
+
+  it("counts the sun under a skyline, and says what the skyline takes", async () => {
+    const open = await (await check(siteInput({ zip: "98101" }))).json();
+    const ring = await (
+      await check(siteInput({ zip: "98101", skyline: new Array(16).fill(20) }))
+    ).json();
+    expect(ring.sun.skyline.profile).toEqual(new Array(16).fill(20));
+    expect(open.sun.house.hours - ring.sun.house.hours).toBeGreaterThanOrEqual(2);
+    expect(ring.sun.skyline.summary).toMatch(/^The skyline you described takes about 4 h/);
+    expect(ring.rules[3].reason).toMatch(/Counted under the skyline you described/);
+    const east = [0, 0, 8, 22, 30, 22, 8, 0, 0, 0, 0, 0, 0, 0, 0, 0];
+    const trees = await (await check(siteInput({ zip: "98101", skyline: east }))).json();
+    expect(trees.sun.skyline.parts).toEqual([
+      expect.stringMatching(
+        /^The trees or buildings to the east take about \d+ h( \d+ min)? of morning sun a day\.$/,
+      ),
+    ]);
   });
 
   it("refuses a body that is not JSON", async () => {
@@ -188,6 +242,23 @@ describe("GET /api/sun-hours", () => {
     expect(body.hours).toBeGreaterThan(7.85); // the solstice is the south face's shortest season day
   });
 
+  it("takes a mount and a skyline as a comma list, north first", async () => {
+    const ring = new Array(16).fill(20).join(",");
+    const open = await (await sunHours("lat=47.6&lon=-122.3&facingDeg=160&mount=pole")).json();
+    const shaded = await (
+      await sunHours(`lat=47.6&lon=-122.3&facingDeg=160&mount=pole&skyline=${ring}`)
+    ).json();
+    expect(open.skyline).toBeNull();
+    expect(open.skylineNote).toMatch(/open sky was assumed/);
+    expect(open.house).toMatchObject({ mount: "pole" });
+    expect(open.house.hours).toBeGreaterThan(14.5);
+    expect(open.hours).toBeLessThan(10); // the front face
+    expect(shaded.skyline).toHaveLength(16);
+    expect(open.house.hours - shaded.house.hours).toBeGreaterThanOrEqual(2);
+    expect(shaded.hours).toBeLessThan(open.hours);
+    expect(shaded.skylineNote).toMatch(/takes about 4 h \d0 min of sun a day/);
+  });
+
   it.each([
     [
       "latitude out of range",
@@ -214,6 +285,25 @@ describe("GET /api/sun-hours", () => {
       /YYYY-MM-DD/,
     ],
     ["a missing longitude", "lat=40&facingDeg=180", "lon", /required/],
+    ["a skyline of 3 angles", "lat=40&lon=0&facingDeg=180&skyline=0,5,10", "skyline", /exactly 16/],
+    [
+      "a skyline in exponent form",
+      `lat=40&lon=0&facingDeg=180&skyline=1e1${",0".repeat(15)}`,
+      "skyline",
+      /north must be a number/,
+    ],
+    [
+      "a skyline angle above 90°",
+      `lat=40&lon=0&facingDeg=180&skyline=${"0,".repeat(15)}120`,
+      "skyline",
+      /north-northwest must be between/,
+    ],
+    [
+      "an unknown mount",
+      "lat=40&lon=0&facingDeg=180&mount=roof",
+      "mount",
+      /pole, a building wall or a tree/,
+    ],
   ])("refuses %s with 400 and the field", async (_name, query, field, message) => {
     const res = await sunHours(query);
     expect(res.status).toBe(400);

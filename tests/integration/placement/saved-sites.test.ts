@@ -3,10 +3,13 @@
 import { eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { getDb } from "@/db/client";
-import { orders, sites, users } from "@/db/schema";
+import { orders, sites, users, type OrderRow } from "@/db/schema";
 import { GET as sitesList, POST as sitesPost } from "@/app/api/sites/route";
 import { DELETE as siteDelete, GET as siteGet } from "@/app/api/sites/[id]/route";
 import type { SessionUser } from "@/lib/auth/session";
+import { resolveGuideContext } from "@/lib/mail/guide-climate";
+import { buildInstallGuide } from "@/lib/mail/install-guide-content";
+import type { OrgFooter } from "@/lib/mail/message-types";
 import { resetDb } from "../../support/db";
 import { jsonRequest, noParams, siteInput } from "./helpers";
 
@@ -114,6 +117,73 @@ describe("a guest's saved site", () => {
     expect((await badLat.json()).error.fields["input.lat"]).toMatch(/between -90 and 90/);
     const db = await getDb();
     expect(await db.select().from(sites)).toEqual([]);
+  });
+});
+
+describe("a saved site's skyline", () => {
+  const east = [0, 0, 8, 22, 30, 22, 8, 0, 0, 0, 0, 0, 0, 0, 0, 0];
+
+  it("is kept in its own column, answered by the routes and carried into the install guide", async () => {
+    const saved = await (
+      await save({ name: "Orchard pole", input: input({ skyline: east }) })
+    ).json();
+    expect(saved.skyline).toEqual(east);
+    const db = await getDb();
+    const [row] = await db.select().from(sites).where(eq(sites.id, saved.id));
+    expect(row?.skyline).toEqual(east);
+
+    const body = await (await open(saved.id, saved.guestToken)).json();
+    expect(body.skyline).toEqual(east);
+    expect(body.input.skyline).toEqual(east);
+    expect(body.result.sun.skyline.parts[0]).toMatch(
+      /^The trees or buildings to the east take about .* of morning sun a day\.$/,
+    );
+
+    // The install guide reads the saved result and says the same in its site section.
+    const context = await resolveGuideContext({
+      order: {} as OrderRow,
+      site: row!,
+      org: {} as OrgFooter,
+    });
+    const guide = buildInstallGuide({ houses: [], ...context });
+    expect(guide.site?.skyline).toMatch(/to the east take about .* of morning sun a day/);
+  });
+
+  it("a site with no skyline keeps none, and its guide says an open sky was assumed", async () => {
+    const saved = await (await save({ name: "Meadow pole", input: input() })).json();
+    expect(saved.skyline).toBeNull();
+    const db = await getDb();
+    const [row] = await db.select().from(sites).where(eq(sites.id, saved.id));
+    expect(row?.skyline).toBeNull();
+    const context = await resolveGuideContext({
+      order: {} as OrderRow,
+      site: row!,
+      org: {} as OrgFooter,
+    });
+    expect(buildInstallGuide({ houses: [], ...context }).site?.skyline).toMatch(
+      /^An open sky was assumed/,
+    );
+  });
+
+  it("refuses a skyline that is not 16 angles from 0 to 90 with 400 and the field, saving nothing", async () => {
+    const res = await save({ name: "Roof", input: input({ skyline: [...east, 0] }) });
+    expect(res.status).toBe(400);
+    expect((await res.json()).error.fields["input.skyline"]).toMatch(/exactly 16 angles/);
+    const db = await getDb();
+    expect(await db.select().from(sites)).toEqual([]);
+    // The database refuses a wrong-length profile too.
+    await expect(
+      db
+        .insert(sites)
+        .values({
+          name: "x",
+          input: {},
+          result: {},
+          label: "good",
+          bandId: "cool",
+          skyline: [1, 2],
+        }),
+    ).rejects.toThrow();
   });
 });
 
