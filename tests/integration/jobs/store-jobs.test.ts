@@ -100,6 +100,12 @@ describe("the store's jobs", () => {
     const clock = new TestClock(new Date(Date.now() + RESERVATION_MS + 5_000));
     await startJobs({ jobs: [storeJob(RESERVATION_SWEEP_JOB)], clock, scheduleCheckSeconds: 1 });
     await tickUntil(clock, async () => (await orderRow(orderId)).status === "expired", { stepMs: 1000, limitMs: 2 * 60_000 });
+    // The order changes inside the handler; the queue marks the job done only after the handler
+    // returns (on a PostgreSQL server that write can land a moment later), so wait for it too.
+    await tickUntil(clock, async () => (await queueStates(RESERVATION_SWEEP_JOB)).includes("completed"), {
+      stepMs: 100,
+      limitMs: 10_000,
+    });
     expect(await queueStates(RESERVATION_SWEEP_JOB)).toContain("completed");
   });
 
