@@ -1,14 +1,16 @@
 import { defineConfig, devices } from "@playwright/test";
 
 // The e2e suite runs against a production build (`next start`) with its own data directory and
-// its own stand-in ports, in Debian's chromium (never a downloaded browser).
-const PORT = 3100;
+// its own stand-in ports, in Debian's chromium (never a downloaded browser). E2E_PORT moves the
+// app and its stand-ins together, so two checkouts can run their suites side by side.
+const PORT = Number(process.env.E2E_PORT ?? 3100);
+const STAND_IN_BASE = PORT + 9111; // 3100 → 12211, 12212, 12213
 export const E2E_ENV = {
   APP_URL: `http://localhost:${PORT}`,
   DATA_DIR: "var/e2e/data",
-  PAYMENTS_PORT: "12211",
-  MAIL_PORT: "12212",
-  UPLOADS_PORT: "12213",
+  PAYMENTS_PORT: String(STAND_IN_BASE),
+  MAIL_PORT: String(STAND_IN_BASE + 1),
+  UPLOADS_PORT: String(STAND_IN_BASE + 2),
 };
 
 export default defineConfig({

@@ -4,6 +4,7 @@ import Stripe from "stripe";
 import { billableWeightLb } from "../../lib/checkout/billable-weight";
 import { signInAs } from "./support/accounts";
 import { expectAccessible } from "./support/axe";
+import { E2E_ENV } from "../../playwright.config";
 
 // The shipping desk in a browser: paid orders are made the way a buyer makes them (checkout
 // route, then the card confirmed through the payments SDK against the stand-in, whose signed
@@ -13,8 +14,8 @@ import { expectAccessible } from "./support/axe";
 const UPS_NUMBER = "1Z5R89390357567127";
 const USPS_NUMBER = "9400111201080805483016";
 
-// The e2e server's payments stand-in (PAYMENTS_PORT in playwright.config.ts).
-const PAYMENTS_PORT = 12211;
+// The e2e server's payments stand-in.
+const PAYMENTS_PORT = Number(E2E_ENV.PAYMENTS_PORT);
 
 type Made = { orderId: string; token: string; number: string };
 
