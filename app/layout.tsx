@@ -12,7 +12,7 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Roostwright · Cedar Hollow Wildlife Rescue", template: "%s · Roostwright" },
   description:
-    "Certified bat roost houses built by volunteers for Cedar Hollow Wildlife Rescue, matched to your summers, with an install guide for your site.",
+    "Roostwright Sound Build bat roost houses, built by volunteers for Cedar Hollow Wildlife Rescue, matched to your summers, with an install guide for your site.",
 };
 
 export const viewport: Viewport = { themeColor: "#1f3a2e", width: "device-width", initialScale: 1 };

@@ -11,8 +11,8 @@ export type DeliveredProps = {
 
 export function DeliveredEmail({ org, name, orderNumber, orderUrl }: DeliveredProps) {
   return (
-    <EmailLayout org={org} preview={`Order ${orderNumber} was delivered.`}>
-      <H1>Your order {orderNumber} was delivered</H1>
+    <EmailLayout org={org} preview={`Order ${orderNumber} is at your door.`}>
+      <H1>Order {orderNumber} is at your door</H1>
       <P>
         Hello {name}. The carrier reports your parcel delivered. Your install guide follows in a
         separate e-mail, so you have it at hand for mounting.

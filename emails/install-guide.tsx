@@ -35,10 +35,10 @@ function intro({
 }: Pick<InstallGuideProps, "occasion" | "pickup"> & { count: number }): string {
   const houses = count === 1 ? "Your house has" : "Your houses have";
   if (occasion === "delivered") {
-    return `${houses} arrived. Here is your install guide again, so it is at hand when you mount ${count === 1 ? "it" : "them"}.`;
+    return `${houses} reached you. Here is your install guide again, so it is at hand when you mount ${count === 1 ? "it" : "them"}.`;
   }
   if (pickup) {
-    return `${count === 1 ? "Your house will be" : "Your houses will be"} ready to pick up soon. Read this first, so the pole or wall and the spot are ready when you bring ${count === 1 ? "it" : "them"} home.`;
+    return `${count === 1 ? "Your house will be" : "Your houses will be"} waiting at the center soon. Read this first, so the pole or wall and the spot are ready when you bring ${count === 1 ? "it" : "them"} home.`;
   }
   return `${count === 1 ? "Your house is" : "Your houses are"} on the way. Read this before ${count === 1 ? "it arrives" : "they arrive"}, so the pole or wall and the spot are ready.`;
 }

@@ -46,16 +46,16 @@ export function OrderConfirmationEmail(props: OrderConfirmationProps) {
       org={org}
       preview={
         hasItems
-          ? `Order ${orderNumber} is confirmed: ${formatUsd(props.amounts.totalCents)} paid.`
+          ? `Order ${orderNumber} is in the workshop queue: ${formatUsd(props.amounts.totalCents)} paid.`
           : `Thank you for your gift of ${formatUsd(props.amounts.giftCents)}.`
       }
     >
-      <H1>{hasItems ? `Your order ${orderNumber} is confirmed` : "Thank you for your gift"}</H1>
+      <H1>{hasItems ? `Order ${orderNumber} is in the workshop queue` : "Thank you for your gift"}</H1>
       <P>
         Thank you, {name}.{" "}
         {hasItems
-          ? "Your payment has arrived and your houses are set aside for you."
-          : "Your gift has arrived and goes straight to the care of injured and orphaned bats."}
+          ? "Your payment came through and your houses are set aside for you."
+          : "Your gift came through and goes straight to the care of injured and orphaned bats."}
       </P>
       <H2>{hasItems ? "What you ordered" : "Your gift"}</H2>
       <AmountRows caption="Order amounts" rows={amountRows(props)} />

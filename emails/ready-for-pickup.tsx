@@ -11,8 +11,8 @@ export type ReadyForPickupProps = {
 
 export function ReadyForPickupEmail({ org, name, orderNumber, orderUrl }: ReadyForPickupProps) {
   return (
-    <EmailLayout org={org} preview={`Order ${orderNumber} is ready to pick up.`}>
-      <H1>Your order {orderNumber} is ready to pick up</H1>
+    <EmailLayout org={org} preview={`Order ${orderNumber} is waiting at the center.`}>
+      <H1>Order {orderNumber} is waiting at the center</H1>
       <P>Hello {name}. Your houses are packed and waiting for you at the center.</P>
       <H2>Where</H2>
       <P>

@@ -24,9 +24,9 @@ export function ShippedEmail({ org, name, orderNumber, orderUrl, parcels }: Ship
   return (
     <EmailLayout
       org={org}
-      preview={`Order ${orderNumber} is on its way${parcels.length > 1 ? ` in ${parcels.length} parcels` : ""}.`}
+      preview={`Order ${orderNumber} is with the carrier${parcels.length > 1 ? ` in ${parcels.length} parcels` : ""}.`}
     >
-      <H1>Your order {orderNumber} is on its way</H1>
+      <H1>Order {orderNumber} is with the carrier</H1>
       <P>Hello {name}. Your houses have left our workshop.</P>
       <H2>{parcels.length === 1 ? "Your parcel" : "Your parcels"}</H2>
       <Bullets

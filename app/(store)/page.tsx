@@ -10,8 +10,8 @@ const STEPS = [
     cta: "Find your climate band",
   },
   {
-    title: "Choose a certified house",
-    text: "Every house on sale is built to roost-design criteria and a built sample is measured by our workshop before it is listed.",
+    title: "Choose a Sound Build house",
+    text: "Every house on sale carries our Roostwright Sound Build: built to our roost-design criteria, with a built sample measured by our workshop before it is listed.",
     href: "/houses",
     cta: "Browse the houses",
   },

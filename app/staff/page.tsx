@@ -114,13 +114,13 @@ export default async function StaffHomePage() {
             Inspections due
           </h2>
           <p className="mt-1 text-ink-soft">
-            Models on sale whose certification lapses within 30 days, or has lapsed.
+            Models on sale whose Sound Build lapses within 30 days, or has lapsed.
           </p>
           {due.length === 0 ? (
             <EmptyState
               className="mt-3"
               level={3}
-              title="No certification lapses in the next 30 days"
+              title="No Sound Build lapses in the next 30 days"
             >
               Every model on sale has a recent passing inspection.
             </EmptyState>

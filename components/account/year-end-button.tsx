@@ -19,7 +19,7 @@ export function YearEndButton({ year, email }: { year: number; email: string }) 
     if (!result.ok) return setAnswer({ tone: "poor", text: result.error.message });
     setAnswer(
       result.data.queued
-        ? { tone: "good", text: `Your ${year} statement is on its way to ${email}.` }
+        ? { tone: "good", text: `We are sending your ${year} statement to ${email} now.` }
         : {
             tone: "info",
             text: `We already e-mailed your ${year} statement to ${email} today; check your inbox and spam folder.`,

@@ -25,11 +25,11 @@ const STEPS: Partial<Record<FulfillmentState, { to: FulfillmentState; label: str
   paid: { to: "packing", label: "Start packing", hint: "Tells the other volunteers this order is on your bench.", done: "Packing started." },
   shipped: {
     to: "delivered",
-    label: "Mark delivered",
+    label: "Log the arrival",
     hint: "When the carrier's page says every box arrived. The buyer gets a note and their install guide.",
-    done: "Marked delivered; the install guide is on its way to the buyer.",
+    done: "Arrival logged; the install guide is going out to the buyer.",
   },
-  ready_for_pickup: { to: "picked_up", label: "Mark collected", hint: "When the buyer has taken the house home.", done: "Marked collected." },
+  ready_for_pickup: { to: "picked_up", label: "Log the handover", hint: "When the buyer has taken the house home.", done: "Handover logged." },
 };
 
 /** What to do with the order now: one button, the packing form, or a shipping form per box. */
@@ -76,8 +76,8 @@ export function NextStep({ orderId, status, method, version, boxes, defaultBoxes
       ) : (
         <div className="flex flex-col items-start gap-2">
           <p className="text-ink-soft">Every box has a tracking number.</p>
-          <Button onClick={() => step("shipped", "Marked shipped; the buyer has been told.")} loading={action.pending}>
-            Mark shipped
+          <Button onClick={() => step("shipped", "With the carrier; the buyer has been told.")} loading={action.pending}>
+            Hand to the carrier
           </Button>
         </div>
       );

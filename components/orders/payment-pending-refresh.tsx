@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useEffect, useState } from "react";
 import { Spinner } from "@/components/ui/spinner";
 
-/** While the payment's confirmation is on its way from the payment service, look again every 2 s (up to a minute). */
+/** While the payment's confirmation is still coming from the payment service, look again every 2 s (up to a minute). */
 export function PaymentPendingRefresh() {
   const router = useRouter();
   const [tries, setTries] = useState(0);

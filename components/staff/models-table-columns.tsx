@@ -51,7 +51,7 @@ export const COLUMNS = [
   }),
   column.accessor("certState", {
     id: "certification",
-    header: "Certification",
+    header: "Sound Build",
     cell: ({ row }) => {
       const r = row.original;
       return (

@@ -98,15 +98,15 @@ export function ModelsTable({ initial }: { initial: ModelsPage }) {
             <option value="retired">Retired</option>
           </Select>
         </Field>
-        <Field label="Certification">
+        <Field label="Sound Build">
           <Select
             value={query.cert}
             onChange={(e) => set("cert", e.target.value as ModelsQuery["cert"])}
           >
             <option value="all">Any</option>
-            <option value="certified">Certified</option>
+            <option value="sound">Holds the Sound Build</option>
             <option value="expiring">Lapses within 30 days</option>
-            <option value="not-certified">Not certified</option>
+            <option value="not-sound">Without the Sound Build</option>
           </Select>
         </Field>
         <Field label="Per page">

@@ -15,17 +15,25 @@ export type CriterionDefinition = {
 };
 
 // Full citations stay in code comments. The `source` strings below are shown to staff and
-// buyers, so they describe each source in plain words without naming people or organizations.
+// buyers, so they describe each source in plain words without naming people or organizations:
+// what it is and its year. Every page that names one of these sources uses SOURCE_NAMES, so the
+// store cites in one style everywhere.
 //   HANDBOOK: Tuttle, M. D., Kiser, M. & Kiser, S., The Bat House Builder's Handbook (2004),
 //     as quoted in agency guides; its nursery-house plan reprinted in Downhome Life.
 //   GUIDELINES_1998: 1998 roost-house certification guidelines, reproduced in the Kitsap Sun,
 //     1999-08-21.
 //   STATE_GROUP: Bat Conservation of Wisconsin, "Attracting Bats".
 //   REGIONAL_GUIDE: Shuswap Watershed Project, bat-house guide (plastic mesh, not metal).
-const HANDBOOK = "A published bat-house building handbook (2004)";
-const GUIDELINES_1998 = "Published roost-house guidelines (1998)";
-const STATE_GROUP = "A state bat-conservation group's guide";
-const REGIONAL_GUIDE = "A regional watershed group's bat-house guide";
+export const SOURCE_NAMES = {
+  handbook: "A published bat-house building handbook (2004)",
+  guidelines1998: "Published roost-house guidelines (1998)",
+  stateGroup: "A state bat-conservation group's guide",
+  regionalGuide: "A regional watershed group's bat-house guide",
+} as const;
+const HANDBOOK = SOURCE_NAMES.handbook;
+const GUIDELINES_1998 = SOURCE_NAMES.guidelines1998;
+const STATE_GROUP = SOURCE_NAMES.stateGroup;
+const REGIONAL_GUIDE = SOURCE_NAMES.regionalGuide;
 
 export const DESIGN_LIMITS = {
   // D1: both ends included.

@@ -23,4 +23,4 @@ export type ResetPassword = z.infer<typeof resetPasswordSchema>;
 
 /** What the forgot-password form always answers, whether or not the address has an account. */
 export const RESET_REQUESTED_MESSAGE =
-  "If an account uses that address, a link to choose a new password is on its way. It works once, for 30 minutes. Check your spam folder if it has not arrived in a few minutes.";
+  "If an account uses that address, we are sending it a link to choose a new password. It works once, for 30 minutes. Check your spam folder if it has not arrived in a few minutes.";

@@ -128,7 +128,7 @@ export async function recordOrderEvent(
 
 export type NewOrderValues = Omit<typeof orders.$inferInsert, "id" | "number" | "status" | "version" | "createdAt" | "updatedAt">;
 
-/** Opens an order at the start of the lifecycle (awaiting payment) with its first event. */
+/** Opens an order at the start of the lifecycle (pending_payment, "At the till") with its first event. */
 export async function openOrder(tx: Tx, { values, actor, note }: { values: NewOrderValues; actor: OrderActor; note: string }): Promise<OrderRow> {
   const [row] = await tx.insert(orders).values({ ...values, status: "pending_payment" }).returning();
   if (!row) throw new Error("order insert returned nothing");

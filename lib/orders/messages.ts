@@ -21,7 +21,7 @@ function paidMessages(order: OrderForMail): OrderMessage[] {
       dedupeKey: `order-confirmation:${order.id}`,
       kind: "order-confirmation",
       to: order.email,
-      subject: hasItems ? `Your order ${number} is confirmed` : `Thank you for your gift (${number})`,
+      subject: hasItems ? `Order ${number} is in the workshop queue` : `Thank you for your gift (${number})`,
       payload: { orderId: order.id },
     },
   ];
@@ -54,10 +54,10 @@ export function messagesForArrival({ order, to }: { order: OrderForMail; to: Ord
     case "paid":
       return paidMessages(order);
     case "shipped":
-      return [{ ...base, kind: "shipped", dedupeKey: `shipped:${order.id}`, subject: `Your order ${number} is on its way` }];
+      return [{ ...base, kind: "shipped", dedupeKey: `shipped:${order.id}`, subject: `Order ${number} is with the carrier` }];
     case "delivered":
       return [
-        { ...base, kind: "delivered", dedupeKey: `delivered:${order.id}`, subject: `Your order ${number} has arrived` },
+        { ...base, kind: "delivered", dedupeKey: `delivered:${order.id}`, subject: `Order ${number} is at your door` },
         {
           ...base,
           kind: "install-guide",
@@ -72,7 +72,7 @@ export function messagesForArrival({ order, to }: { order: OrderForMail; to: Ord
           ...base,
           kind: "ready-for-pickup",
           dedupeKey: `ready-for-pickup:${order.id}`,
-          subject: `Your order ${number} is ready to collect`,
+          subject: `Order ${number} is waiting at the center`,
         },
       ];
     default:

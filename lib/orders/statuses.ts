@@ -35,8 +35,8 @@ export function isFulfillmentState(value: unknown): value is FulfillmentState {
 /** `label` for badges, queues and the buyer's timeline; `buyerNote` for the buyer's order page. */
 export const ORDER_STATUS_LABELS: Record<OrderStatus, { label: string; buyerNote: string }> = {
   pending_payment: {
-    label: "Awaiting payment",
-    buyerNote: "We're waiting for your payment to go through.",
+    label: "At the till",
+    buyerNote: "Your payment is still going through; this page updates when it does.",
   },
   paid: {
     label: "In the workshop queue",
@@ -52,7 +52,7 @@ export const ORDER_STATUS_LABELS: Record<OrderStatus, { label: string; buyerNote
   },
   shipped: {
     label: "With the carrier",
-    buyerNote: "Every box in your order is on its way; follow it with the tracking links.",
+    buyerNote: "Every box in your order has left the workshop; follow it with the tracking links.",
   },
   delivered: {
     label: "Arrived",
@@ -63,15 +63,15 @@ export const ORDER_STATUS_LABELS: Record<OrderStatus, { label: string; buyerNote
     buyerNote: "Your house is ready to collect at the center's front desk.",
   },
   picked_up: {
-    label: "Collected",
-    buyerNote: "You've collected your house. Your install guide is ready.",
+    label: "Handed over",
+    buyerNote: "You've taken your house home. Your install guide is ready.",
   },
   cancelled: {
     label: "Cancelled",
     buyerNote: "This order was cancelled.",
   },
   expired: {
-    label: "Checkout expired",
+    label: "Hold ran out",
     buyerNote: "The 30-minute hold ran out before the payment arrived, so the order was closed; a late payment is refunded.",
   },
   refunded: {

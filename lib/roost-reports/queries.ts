@@ -241,7 +241,7 @@ export type HouseQuestion = {
   history: { season: number; seasonLabel: string; answer: RoostAnswer; countBand: CountBand | null; reportedAt: string; current: boolean }[];
 };
 
-/** Each house of the given orders that has arrived, with the season to answer for and what was said before. */
+/** Each house of the given orders that has reached its buyer, with the season to answer for and what was said before. */
 export async function listHouseQuestions({ orderIds, now = new Date() }: { orderIds: string[]; now?: Date }): Promise<HouseQuestion[]> {
   if (orderIds.length === 0) return [];
   const db = await getDb();

@@ -45,8 +45,8 @@ export const modelsQuerySchema = z.object({
     .enum(["all", "draft", "published", "retired"], { error: "Choose a status to filter by." })
     .default("all"),
   cert: z
-    .enum(["all", "certified", "expiring", "not-certified"], {
-      error: "Choose a certification filter.",
+    .enum(["all", "sound", "expiring", "not-sound"], {
+      error: "Choose a Sound Build filter.",
     })
     .default("all"),
   sort: z.enum(SORT_KEYS, { error: "Sort by one of the table's columns." }).default("name"),
@@ -85,7 +85,7 @@ export type ModelsPage = {
 };
 
 const STATUS_ORDER: Record<ModelStatus, number> = { published: 0, draft: 1, retired: 2 };
-// Most urgent first when sorted up: lapsed and failing before waiting, certified last.
+// Most urgent first when sorted up: lapsed and failing before waiting, Sound Build holders last.
 const CERT_ORDER: Record<CertificationStateId, number> = {
   expired: 0,
   failed: 1,
@@ -108,9 +108,9 @@ const COMPARE: Record<SortKey, (a: StaffModelRow, b: StaffModelRow) => number> =
 
 function matches(row: StaffModelRow, query: ModelsQuery): boolean {
   if (query.status !== "all" && row.status !== query.status) return false;
-  if (query.cert === "certified" && !row.certified) return false;
+  if (query.cert === "sound" && !row.certified) return false;
   if (query.cert === "expiring" && !row.expiresWithin30Days) return false;
-  if (query.cert === "not-certified" && row.certified) return false;
+  if (query.cert === "not-sound" && row.certified) return false;
   if (query.q) {
     const needle = query.q.toLowerCase();
     return [row.name, row.slug, row.builderName].some((t) => t.toLowerCase().includes(needle));
@@ -130,7 +130,7 @@ export function applyModelsQuery({
   const filtered = rows
     .filter((r) => matches(r, query))
     .sort((a, b) => {
-      // Models with no expiry (never certified) go after every dated one, in either direction.
+      // Models with no expiry (never a Sound Build) go after every dated one, in either direction.
       if (query.sort === "expires" && (a.expiresAt === null) !== (b.expiresAt === null))
         return a.expiresAt === null ? 1 : -1;
       // Ties fall back to the name so the order never shuffles between pages.

@@ -137,7 +137,7 @@ test("a volunteer filters the queue, packs a two-house order into two boxes and 
   await second.getByRole("button", { name: "Ship box 2" }).click();
   await expect(page.getByText("With the carrier").first()).toBeVisible();
   await expect(page.getByText("Nothing left to do")).toHaveCount(0);
-  await expect(page.getByRole("button", { name: "Mark delivered" })).toBeVisible();
+  await expect(page.getByRole("button", { name: "Log the arrival" })).toBeVisible();
   await expectAccessible(page);
   await shoot(page, "fulfillment-order-shipped");
 
@@ -170,11 +170,11 @@ test("a pickup order is marked ready and then collected", async ({ page, request
   await page.waitForLoadState("networkidle");
   await pressUntil(page.getByRole("button", { name: "Start packing" }), page.getByRole("button", { name: "Ready at the front desk" }));
   await page.getByRole("button", { name: "Ready at the front desk" }).click();
-  await expect(page.getByRole("button", { name: "Mark collected" })).toBeVisible();
+  await expect(page.getByRole("button", { name: "Log the handover" })).toBeVisible();
   await expectAccessible(page);
-  await page.getByRole("button", { name: "Mark collected" }).click();
+  await page.getByRole("button", { name: "Log the handover" }).click();
   await expect(page.getByText("Nothing left to do at the shipping desk for this order.")).toBeVisible();
-  await expect(page.getByText("Collected").first()).toBeVisible();
+  await expect(page.getByText("Handed over").first()).toBeVisible();
 });
 
 test("an admin sees corrections and refunds; the order page and its actions refuse other roles", async ({ page, request, browser }) => {

@@ -51,7 +51,7 @@ test("a paid order's confirmation and install guide arrive in the inbox, once ea
   await page.waitForURL(/\/orders\//);
   await expect(page.getByText("Thank you: your order is paid")).toBeVisible({ timeout: 30_000 });
 
-  const confirmation = await waitForMessage(page, email, /^Your order RW-\d+ is confirmed$/);
+  const confirmation = await waitForMessage(page, email, /^Order RW-\d+ is in the workshop queue$/);
   const guide = await waitForMessage(page, email, /^Your install guide for order RW-\d+$/);
   expect(confirmation.text).toMatch(/Saltbush × 1 \(\$159\.00 each\) +\$159\.00/);
   expect(confirmation.text).toContain("/orders/");
@@ -74,7 +74,7 @@ test("a paid order's confirmation and install guide arrive in the inbox, once ea
   const all = await messagesTo(page, email);
   expect(all.map((m) => m.subject.replace(/RW-\d+/, "RW-n")).sort()).toEqual([
     "Your install guide for order RW-n",
-    "Your order RW-n is confirmed",
+    "Order RW-n is in the workshop queue",
   ]);
 });
 
@@ -163,7 +163,7 @@ test("the account and admin mail pages work and pass the accessibility scan", as
   await page.getByRole("link", { name: "Sent", exact: true }).click();
   await expect(page).toHaveURL(/status=sent/);
   await page
-    .getByRole("button", { name: /^Send again: Your order RW-\d+ is confirmed$/ })
+    .getByRole("button", { name: /^Send again: Order RW-\d+ is in the workshop queue$/ })
     .first()
     .click();
   await expect(page.getByText("A new copy is queued.")).toBeVisible();

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { BandFinder } from "@/components/catalog/band-finder";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { BAND_IDS, CLIMATE_BANDS } from "@/lib/catalog/climate-bands";
+import { SOURCE_NAMES } from "@/lib/catalog/design-criteria";
 import { SHADE_LABELS } from "@/lib/catalog/spec";
 
 export const metadata: Metadata = { title: "Your climate band" };
@@ -35,8 +36,8 @@ export default function ClimatePage() {
             })}
           </ul>
           <p className="text-sm text-ink-soft">
-            Colour guidance keyed to the average July high: Tuttle, Kiser &amp; Kiser, The Bat House Builder&apos;s Handbook (2004),
-            as reproduced by wildlife agencies. Vents where July highs average 85 °F or more.
+            Colour guidance keyed to the average July high: {SOURCE_NAMES.handbook}, as reproduced by wildlife agencies.
+            Vents where July highs average 85 °F or more: {SOURCE_NAMES.stateGroup}.
           </p>
         </section>
       </div>

@@ -25,7 +25,7 @@ export default async function HousesPage({ searchParams }: { searchParams: Promi
     <PageShell>
       <PageHeader
         title="Bat houses"
-        lead="Every house here meets our roost-design criteria, and a built sample was measured by our workshop. Choose your summers to see which suit you."
+        lead="Every house here carries our Roostwright Sound Build: it meets our roost-design criteria, and a built sample was measured by our workshop. Choose your summers to see which suit you."
       />
       {!parsed.success ? (
         <div className="mb-6">

@@ -18,7 +18,7 @@ export default async function StaffModelsPage() {
     <PageShell>
       <PageHeader
         title="House models"
-        lead="Every model the workshop has listed: drafts, those on sale and retired ones, with stock and certification."
+        lead="Every model the workshop has listed: drafts, those on sale and retired ones, with stock and Sound Build standing."
       >
         <div>
           <ButtonLink href="/staff/models/new">List a new model</ButtonLink>

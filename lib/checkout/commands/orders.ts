@@ -113,7 +113,7 @@ export async function startCheckout(input: CheckoutRequest, user: SessionUser | 
 /** Before each payment attempt: the order's stock is held again if a failed attempt released it. */
 export async function holdForPayment(order: OrderRow, now = new Date()): Promise<OrderRow> {
   if (order.status !== "pending_payment") {
-    throw new AppError("conflict", order.status === "expired" ? "This checkout expired after 30 minutes. Please check out again." : "This order is already paid.");
+    throw new AppError("conflict", order.status === "expired" ? "The 30-minute hold on these houses ran out. Please check out again." : "This order is already paid.");
   }
   const db = await getDb();
   return db.transaction(async (tx) => {

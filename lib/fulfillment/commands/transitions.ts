@@ -167,7 +167,7 @@ export async function shipBox({
         to: "shipped",
         actor,
         expectedVersion: version,
-        note: `${note}; every box is on its way`,
+        note: `${note}; every box is with the carrier`,
         kinds: ["advance"],
       });
       return { order: shipped, box: updated!, orderShipped: true };

@@ -140,7 +140,7 @@ describe("the install guide", () => {
     const { text } = await sentGuide(orderId);
     expect(text).toMatch(/could not place ZIP 97399/);
     expect(text).toMatch(/100 °F and above light or white, vented, with afternoon shade/);
-    expect(text).toMatch(/ready to pick up soon/);
+    expect(text).toMatch(/waiting at the center soon/);
     expectEveryCaution(text);
   });
 
@@ -158,7 +158,7 @@ describe("the install guide", () => {
       })
       .returning();
     const { text } = await renderOutboxMessage({ db, row: row! });
-    expect(text).toMatch(/Your house has arrived\. Here is your install guide again/);
+    expect(text).toMatch(/Your house has reached you\. Here is your install guide again/);
     expectEveryCaution(text);
   });
 });
@@ -174,7 +174,7 @@ describe("amounts", () => {
     const number = formatOrderNumber(order.number);
     const [confirmation] = messagesMatching(
       mail,
-      new RegExp(`^Your order ${number} is confirmed$`),
+      new RegExp(`^Order ${number} is in the workshop queue$`),
     );
     const text = confirmation!.text!;
     expect(text).toMatch(new RegExp(`Hollow Four × 2 \\(\\$149\\.00 each\\) +\\$298\\.00`));
@@ -210,10 +210,10 @@ describe("amounts", () => {
     expect(receiptText).toMatch(/Of which your gift +\$25\.00/);
   });
 
-  it("a plain purchase is confirmed as not a contribution", async () => {
+  it("a plain purchase's confirmation says it is not a contribution", async () => {
     await payForOrder(payments, { items: [{ slug: "twin-ridge", quantity: 1 }] });
     await deliverPendingMail();
-    const [confirmation] = messagesMatching(mail, /is confirmed$/);
+    const [confirmation] = messagesMatching(mail, /is in the workshop queue$/);
     expect(confirmation!.text).toContain(
       "This was a purchase, not a charitable contribution, so no part of it is tax-deductible.",
     );

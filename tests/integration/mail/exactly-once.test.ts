@@ -57,7 +57,7 @@ describe("every message goes out exactly once", () => {
     expect(await deliverPendingMail()).toEqual({ sent: 0, retrying: 0, failed: 0 });
 
     const number = formatOrderNumber((await orderRow(orderId)).number);
-    expect(messagesMatching(mail, new RegExp(`^Your order ${number} is confirmed$`))).toHaveLength(
+    expect(messagesMatching(mail, new RegExp(`^Order ${number} is in the workshop queue$`))).toHaveLength(
       1,
     );
     expect(messagesMatching(mail, /install guide/)).toHaveLength(1);
@@ -112,7 +112,7 @@ describe("every message goes out exactly once", () => {
     ).toEqual([
       expect.stringMatching(/^Your gift receipt from /),
       expect.stringMatching(/^Your install guide for order RW-\d+$/),
-      expect.stringMatching(/^Your order RW-\d+ is confirmed$/),
+      expect.stringMatching(/^Order RW-\d+ is in the workshop queue$/),
     ]);
     rows = await rowsFor(orderId);
     expect(rows.every((r) => r.status === "sent" && r.attempts === 2 && r.lastError === null)).toBe(

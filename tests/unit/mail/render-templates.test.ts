@@ -86,7 +86,7 @@ describe("rendered messages", () => {
     const text = await render(element, { plainText: true, htmlToTextOptions: PLAIN_TEXT_OPTIONS });
     for (const cents of [29_800, 2600, 1669, 2500, 36_569])
       expect(text).toContain(usd.format(cents / 100));
-    expect(text).toContain("Your order R-1001 is confirmed");
+    expect(text).toContain("Order R-1001 is in the workshop queue");
     // The amounts keep their columns in plain text: label, then amount, on one line.
     expect(text).toMatch(/Hollow Four × 2 \(\$149\.00 each\) +\$298\.00\n/);
     expect(text).toMatch(/Total paid +\$365\.69/);

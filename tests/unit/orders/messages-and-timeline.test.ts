@@ -12,7 +12,7 @@ const order = { id: "0b0c5a3e-0000-4000-8000-000000000001", number: 42, email: "
 describe("e-mails on arrival in a state", () => {
   it("queues the shipped, delivered (+ install guide) and ready-for-pickup messages, one key each", () => {
     expect(messagesForArrival({ order, to: "shipped" })).toEqual([
-      { kind: "shipped", dedupeKey: `shipped:${order.id}`, to: order.email, subject: "Your order RW-00042 is on its way", payload: { orderId: order.id } },
+      { kind: "shipped", dedupeKey: `shipped:${order.id}`, to: order.email, subject: "Order RW-00042 is with the carrier", payload: { orderId: order.id } },
     ]);
     expect(messagesForArrival({ order, to: "delivered" }).map((m) => [m.kind, m.dedupeKey, m.payload])).toEqual([
       ["delivered", `delivered:${order.id}`, { orderId: order.id }],
@@ -27,7 +27,7 @@ describe("e-mails on arrival in a state", () => {
 
   it("confirms a payment with the install guide, and the gift receipt when there is a gift", () => {
     expect(messagesForArrival({ order, to: "paid" }).map((m) => [m.kind, m.dedupeKey, m.subject])).toEqual([
-      ["order-confirmation", `order-confirmation:${order.id}`, "Your order RW-00042 is confirmed"],
+      ["order-confirmation", `order-confirmation:${order.id}`, "Order RW-00042 is in the workshop queue"],
       ["install-guide", `install-guide:paid:${order.id}`, "Your install guide for order RW-00042"],
     ]);
     const giftOnly = { ...order, method: "none", giftCents: 2500 };
@@ -68,7 +68,7 @@ describe("the buyer's timeline", () => {
       { fromStatus: "pending_payment", toStatus: "pending_payment", createdAt: at(1) },
       { fromStatus: "pending_payment", toStatus: "paid", createdAt: at(2) },
     ]);
-    expect(entries.map((e) => e.title)).toEqual(["Awaiting payment", "In the workshop queue", "On the packing bench"]);
+    expect(entries.map((e) => e.title)).toEqual(["At the till", "In the workshop queue", "On the packing bench"]);
     expect(entries.at(-1)?.detail).toBe("A volunteer is checking and packing your house now.");
   });
 
@@ -81,7 +81,7 @@ describe("the buyer's timeline", () => {
     expect(entries.map((e) => [e.title, e.corrected])).toEqual([
       ["With the carrier", false],
       ["Back to: Boxed and weighed", true],
-      ["Checkout expired", false],
+      ["Hold ran out", false],
     ]);
   });
 });

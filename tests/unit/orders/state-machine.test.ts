@@ -281,14 +281,14 @@ describe("canTransition: guards and messages", () => {
     expect(canTransition({ from: "expired", to: "paid", method: "parcel", role: "system" })).toEqual({
       ok: false,
       code: "final_state",
-      message: 'A "Checkout expired" order can\'t change any more.',
+      message: 'A "Hold ran out" order can\'t change any more.',
     });
     expect(canTransition({ from: "refunded", to: "paid", method: "none", role: "system" })).toMatchObject({ ok: false, code: "final_state" });
     expect(canTransition({ from: "paid", to: "paid", method: "parcel", role: "system" })).toMatchObject({ ok: false, code: "same_state" });
     expect(canTransition({ from: "pending_payment", to: "expired", method: "none", role: "admin" })).toMatchObject({
       ok: false,
       code: "role_not_allowed",
-      message: 'Only the payment system can move an order from "Awaiting payment" to "Checkout expired".',
+      message: 'Only the payment system can move an order from "At the till" to "Hold ran out".',
     });
     // A state name from outside TypeScript's reach (a form post), hence the cast.
     const posted = "lost" as OrderStatus;

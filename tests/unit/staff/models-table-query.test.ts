@@ -17,7 +17,7 @@ const row = (name: string, changes: Partial<StaffModelRow> = {}): StaffModelRow 
   stock: 5,
   lowStockThreshold: 2,
   certState: "certified",
-  certWords: "certified",
+  certWords: "Roostwright Sound Build",
   certified: true,
   inspectedOn: "2026-01-01T12:00:00.000Z",
   expiresAt: "2027-01-01T12:00:00.000Z",
@@ -68,14 +68,18 @@ describe("applyModelsQuery", () => {
     }
   });
 
-  it("filters by status, certification and a search of name, slug and builder", () => {
+  it("filters by status, Sound Build standing and a search of name, slug and builder", () => {
     expect(
       applyModelsQuery({ rows: ROWS, query: q({ status: "draft" }) }).items.map((r) => r.name),
     ).toEqual(["birch"]);
     expect(
       applyModelsQuery({ rows: ROWS, query: q({ cert: "expiring" }) }).items.map((r) => r.name),
     ).toEqual(["Cedar"]);
-    expect(applyModelsQuery({ rows: ROWS, query: q({ cert: "not-certified" }) }).total).toBe(2);
+    expect(
+      applyModelsQuery({ rows: ROWS, query: q({ cert: "sound" }) }).items.map((r) => r.name),
+    ).toEqual(["Alder", "Cedar"]);
+    expect(applyModelsQuery({ rows: ROWS, query: q({ cert: "not-sound" }) }).total).toBe(2);
+    expect(modelsQuerySchema.safeParse({ cert: "certified" }).success).toBe(false);
     expect(
       applyModelsQuery({ rows: ROWS, query: q({ q: "larkspur" }) }).items.map((r) => r.name),
     ).toEqual(["Cedar"]);

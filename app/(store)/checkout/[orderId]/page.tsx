@@ -43,7 +43,7 @@ export default async function CheckoutPage({ params, searchParams }: Props) {
   if (order.status === "expired" || !order.paymentIntentId) {
     return (
       <PageShell narrow>
-        <PageHeader title="This checkout has expired" lead="We hold houses for 30 minutes while you pay; the hold ran out and nothing was charged." />
+        <PageHeader title="The hold on these houses ran out" lead="We hold houses for 30 minutes while you pay; the time passed and nothing was charged." />
         <Link href="/cart" className="font-bold underline">
           Back to your cart to try again
         </Link>

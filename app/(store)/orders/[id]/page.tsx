@@ -57,7 +57,7 @@ export default async function OrderPage({ params, searchParams }: Props) {
       {order.status === "pending_payment" ? (
         <div className="mb-8 flex flex-col gap-3">
           <Alert tone="info" title="Waiting for your payment">
-            If you just paid, the confirmation is on its way; this page updates by itself.{" "}
+            If you just paid, the confirmation follows in a moment; this page updates by itself.{" "}
             <Link href={`/checkout/${order.id}${linkSuffix}`} className="font-bold underline">
               Go to the payment page
             </Link>

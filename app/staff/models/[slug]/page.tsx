@@ -25,8 +25,8 @@ export default async function StaffModelPage({ params }: { params: Promise<{ slu
         refusals={model.publishRefusals}
       />
       {cert.expiresWithin30Days && cert.expiresAt ? (
-        <Alert tone="warn" title={`Certification lapses on ${formatDay(cert.expiresAt)}`}>
-          Inspect a built unit before then to keep it on sale as certified.
+        <Alert tone="warn" title={`Sound Build lapses on ${formatDay(cert.expiresAt)}`}>
+          Inspect a built unit before then to keep it on sale with its Sound Build.
         </Alert>
       ) : null}
       <ModelForm model={{ id: model.row.id, input: model.input }} />

@@ -51,7 +51,7 @@ export default async function StaffModelInspectionsPage({
           <EmptyState
             level={3}
             title="No inspections yet"
-            description="The first passing inspection certifies the model."
+            description="The first passing inspection gives the model its Sound Build."
           />
         ) : (
           <ol className="flex flex-col gap-4">
