@@ -110,9 +110,9 @@ describe("every message goes out exactly once", () => {
         .map((m) => m.subject)
         .sort(),
     ).toEqual([
+      expect.stringMatching(/^Order RW-\d+ is in the workshop queue$/),
       expect.stringMatching(/^Your gift receipt from /),
       expect.stringMatching(/^Your install guide for order RW-\d+$/),
-      expect.stringMatching(/^Order RW-\d+ is in the workshop queue$/),
     ]);
     rows = await rowsFor(orderId);
     expect(rows.every((r) => r.status === "sent" && r.attempts === 2 && r.lastError === null)).toBe(
