@@ -73,8 +73,8 @@ test("a paid order's confirmation and install guide arrive in the inbox, once ea
   await page.waitForTimeout(6_000);
   const all = await messagesTo(page, email);
   expect(all.map((m) => m.subject.replace(/RW-\d+/, "RW-n")).sort()).toEqual([
-    "Your install guide for order RW-n",
     "Order RW-n is in the workshop queue",
+    "Your install guide for order RW-n",
   ]);
 });
 
