@@ -36,8 +36,8 @@ export default function ClimatePage() {
             })}
           </ul>
           <p className="text-sm text-ink-soft">
-            Colour guidance keyed to the average July high: {SOURCE_NAMES.handbook}, as reproduced by wildlife agencies.
-            Vents where July highs average 85 °F or more: {SOURCE_NAMES.stateGroup}.
+            Colour guidance keyed to the average July high, as reproduced by wildlife agencies; vents where July highs
+            average 85 °F or more. Sources: {SOURCE_NAMES.handbook}; {SOURCE_NAMES.stateGroup}.
           </p>
         </section>
       </div>
