@@ -7,8 +7,6 @@ import { INTERIOR_SURFACES, INTERIOR_SURFACE_LABELS, type HouseSpec } from "./sp
 // the listed spec, and a built unit measured by staff passed within the last 12 months.
 
 export const CERTIFICATION_NAME = "Roostwright Sound Build";
-/** The badge's short name, for prose and staff labels: one name for a house's standing everywhere. */
-export const STANDING_NAME = "Sound Build";
 export const CERTIFICATION_SUMMARY =
   "Built to our roost-design criteria and measured by our staff on a finished house within the last 12 months.";
 
