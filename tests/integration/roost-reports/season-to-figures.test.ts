@@ -9,6 +9,7 @@ import { deliverPendingMail } from "@/lib/mail/sender";
 import { changeOrderStatus } from "@/lib/orders/commands";
 import { reviewRoostReport } from "@/lib/roost-reports/commands";
 import { answerFromLink } from "@/lib/roost-reports/link-answers";
+import { listReportQuestionsForViewer, reportFromOrderPage } from "@/lib/roost-reports/order-reports";
 import { getModelOccupancy, getOccupancyPicture } from "@/lib/roost-reports/queries";
 import { queueRoostReportMail } from "@/lib/roost-reports/season-job";
 import { signOptOutToken } from "@/lib/roost-reports/report-tokens";
@@ -216,5 +217,35 @@ describe("a paid order through the season job to the figures", () => {
     expect(advice!.text).not.toMatch(/house 2 of 2/);
     expect(advice!.headers?.["List-Unsubscribe"]).toMatch(/\/api\/roost-reports\/stop\?token=/);
     expect(advice!.headers?.["List-Unsubscribe-Post"]).toBe("List-Unsubscribe=One-Click");
+  });
+
+  it("asks the same questions on the account page and the guest's private order page, only of the buyer", async () => {
+    const orderId = await collectedOrder(2);
+    const db = await getDb();
+    const customer = await demoUser("customer");
+    await db.update(orders).set({ userId: customer.id }).where(eq(orders.id, orderId));
+    const [order] = await db.select().from(orders).where(eq(orders.id, orderId));
+    const staff = await demoUser("staff");
+    const other = { ...customer, id: staff.id };
+
+    const asBuyer = await listReportQuestionsForViewer({ order: order!, token: null, user: customer });
+    expect(asBuyer.map((q) => [q.unit, q.modelName, q.current])).toEqual([[1, "Hollow Four", null], [2, "Hollow Four", null]]);
+    expect(asBuyer[0]!.summer).toBeGreaterThanOrEqual(1);
+    expect(await listReportQuestionsForViewer({ order: order!, token: order!.accessToken, user: null })).toHaveLength(2);
+    expect(await listReportQuestionsForViewer({ order: order!, token: null, user: other })).toEqual([]);
+    expect(await listReportQuestionsForViewer({ order: order!, token: "not-the-token", user: null })).toEqual([]);
+
+    const { season, orderLineId } = asBuyer[0]!;
+    const input = { orderLineId, unit: 1, season, answer: "signs" as const, note: "Droppings on the porch rail.", countBand: undefined, mount: "building" as const };
+    expect((await reportFromOrderPage({ orderId, accessToken: null, user: customer, input })).outcome).toBe("recorded");
+    expect((await reportFromOrderPage({ orderId, accessToken: order!.accessToken, user: null, input: { ...input, unit: 2, answer: "no_sign" } })).outcome).toBe("recorded");
+    // The shipping desk can open any order but cannot answer for its buyer; workshop staff cannot open it.
+    const desk = await demoUser("fulfillment");
+    await expect(reportFromOrderPage({ orderId, accessToken: null, user: desk, input })).rejects.toMatchObject({ code: "forbidden" });
+    await expect(reportFromOrderPage({ orderId, accessToken: null, user: staff, input })).rejects.toMatchObject({ code: "not_found" });
+    const rows = await db.select().from(roostReports).where(eq(roostReports.orderLineId, orderLineId));
+    expect(rows.map((r) => [r.unit, r.answer, r.reporter, r.mount]).sort()).toEqual([[1, "signs", "account", "building"], [2, "no_sign", "order_link", "building"]]);
+    const again = await listReportQuestionsForViewer({ order: order!, token: null, user: customer });
+    expect(again.map((q) => q.current?.answer)).toEqual(["signs", "no_sign"]);
   });
 });
