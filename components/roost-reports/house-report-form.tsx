@@ -122,11 +122,20 @@ export function HouseReportForm({ question, orderId, accessToken }: { question: 
         <Textarea name="note" rows={2} maxLength={MAX_NOTE_CHARS} defaultValue={question.current?.note ?? ""} />
       </Field>
       <Field
+        id={`${id}-photo`}
         label="A photo"
         hint={`Optional: droppings below the house or bats at the entrance. JPEG, PNG or WebP up to ${MAX_UPLOAD_BYTES / (1024 * 1024)} MB. Only our workshop staff see it.${question.current?.hasPhoto ? " A photo is already attached." : ""}`}
         error={errors.photo ?? errors.file}
       >
-        <input type="file" name="photo" accept={ACCEPT_ATTRIBUTE} className="text-sm file:mr-3 file:rounded-lg file:border file:border-paper-300 file:bg-paper-50 file:px-3 file:py-2 file:font-bold" />
+        {/* A bare file input, so Field's label is tied to it by the id given above. */}
+        <input
+          id={`${id}-photo`}
+          aria-describedby={[`${id}-photo-hint`, errors.photo ?? errors.file ? `${id}-photo-error` : ""].filter(Boolean).join(" ")}
+          aria-invalid={errors.photo ?? errors.file ? true : undefined}
+          type="file"
+          name="photo"
+          accept={ACCEPT_ATTRIBUTE}
+          className="text-sm file:mr-3 file:rounded-lg file:border file:border-paper-300 file:bg-paper-50 file:px-3 file:py-2 file:font-bold" />
       </Field>
       <div className="flex flex-wrap items-center gap-3">
         <Button type="submit" disabled={busy}>

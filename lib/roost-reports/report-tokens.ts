@@ -54,7 +54,10 @@ function open(
   now: Date,
 ): { ok: true; claims: Record<string, unknown> } | { ok: false; reason: TokenRefusal } {
   if (token.length > 600) return { ok: false, reason: "malformed" };
-  const [version, body, signature, extra] = token.split(".");
+  // A link at the end of a sentence in the plain-text e-mail ("… Stop these questions <url>.")
+  // reaches us with the full stop when a mail program links it: a token never ends in ".", so
+  // trailing ones are dropped before the parts are read (the signature is checked all the same).
+  const [version, body, signature, extra] = token.replace(/\.+$/, "").split(".");
   if (version !== VERSION || !body || !signature || extra !== undefined) return { ok: false, reason: "malformed" };
   const given = Buffer.from(signature, "base64url");
   let claims: Record<string, unknown>;

@@ -35,3 +35,9 @@ PROTECTED_ROUTES.push(
   { method: "GET", path: "/api/fulfillment/orders", allowed: ["fulfillment", "admin"] },
   { method: "GET", path: "/api/fulfillment/orders.csv", allowed: ["fulfillment", "admin"] },
 );
+
+// Roost reports (issue 16): the workshop's review list and its figures, staff and admin only.
+PROTECTED_PAGES.push(
+  { path: "/staff/roost-reports", allowed: ["staff", "admin"], heading: /^Roost reports$/ },
+  { path: "/staff/roost-reports/figures", allowed: ["staff", "admin"], heading: /^Roost report figures$/ },
+);

@@ -39,6 +39,16 @@ describe("roost report tokens", () => {
     expect(verifyOptOutToken({ secret, token: optOut, now })).toMatchObject({ ok: true, claims: { email: "a@example.org" } });
   });
 
+  it("reads a link that kept the full stop of its sentence, and still checks its signature", () => {
+    const optOut = signOptOutToken({ secret, claims: { orderId: claims.orderLineId, email: "a@example.org" }, now });
+    expect(verifyOptOutToken({ secret, token: `${optOut}.`, now })).toEqual({ ok: true, claims: { orderId: claims.orderLineId, email: "a@example.org" } });
+    expect(verifyAnswerToken({ secret, token: `${signAnswerToken({ secret, claims, now })}..`, now })).toMatchObject({ ok: true, claims });
+    expect(verifyAnswerToken({ secret, token: `${optOut}.`, now })).toEqual({ ok: false, reason: "wrong-purpose" });
+    const [v, body, sig] = optOut.split(".");
+    expect(verifyOptOutToken({ secret, token: `${v}.${body}.${sig!.slice(0, -2)}AA.`, now })).toEqual({ ok: false, reason: "forged" });
+    expect(verifyOptOutToken({ secret, token: `${v}.${body}.${sig}.x`, now })).toEqual({ ok: false, reason: "malformed" });
+  });
+
   it("expires after its life, the last instant excluded", () => {
     const token = signAnswerToken({ secret, claims, now });
     const end = new Date(Math.floor(now.getTime() / 1000) * 1000 + TOKEN_LIFE_DAYS * 86_400_000);
