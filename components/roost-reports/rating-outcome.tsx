@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import { fetchJson } from "@/lib/http/client";
 import { intervalWords, percent } from "./format";
 import { IntervalBar } from "./interval-bar";
 
@@ -12,9 +13,7 @@ type RatingFigures = {
 };
 
 async function fetchRatings(): Promise<RatingFigures> {
-  const response = await fetch("/api/roost-reports/ratings");
-  if (!response.ok) throw new Error("The figures could not be loaded.");
-  return (await response.json()) as RatingFigures;
+  return fetchJson<RatingFigures>("/api/roost-reports/ratings", { fallbackMessage: "The figures could not be loaded." });
 }
 
 const RATING_WORDS: Record<string, string> = { good: "good", fair: "fair", poor: "poor" };
