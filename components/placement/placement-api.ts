@@ -4,6 +4,7 @@ import { fetchJson } from "@/lib/http/client";
 import type { PlacementAnswer } from "@/lib/placement/placement-answer";
 import { GUEST_SITE_TOKEN_HEADER, type SavedSiteReceipt } from "@/lib/placement/saved-site-schema";
 import type { PlacementInput } from "@/lib/placement/schema";
+import type { Rating } from "@/lib/shared/rating";
 
 export { ApiError } from "@/lib/http/client";
 
@@ -29,7 +30,7 @@ export type SavedSiteDetail = {
   name: string;
   input: PlacementInput;
   result: PlacementAnswer;
-  label: "good" | "fair" | "poor";
+  label: Rating;
   bandId: string;
   createdAt: string;
 };

@@ -4,6 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/http/client";
 import { intervalWords, percent } from "./format";
 import { IntervalBar } from "./interval-bar";
+import type { Rating } from "@/lib/shared/rating";
 
 type RatingFigures = {
   minimumHouses: number;
@@ -19,7 +20,7 @@ async function fetchRatings(): Promise<RatingFigures> {
 const RATING_WORDS: Record<string, string> = { good: "good", fair: "fair", poor: "poor" };
 
 /** Beside a site's rating: how houses on sites with the same rating fared, from buyers' reports. */
-export function RatingOutcome({ label }: { label: "good" | "fair" | "poor" }) {
+export function RatingOutcome({ label }: { label: Rating }) {
   const { data, isError } = useQuery({ queryKey: ["roost-ratings"], queryFn: fetchRatings, staleTime: 5 * 60_000 });
   if (isError || !data) return null;
   const row = data.byRating.find((r) => r.rating === label);

@@ -16,6 +16,7 @@ import {
   type ReportFact,
 } from "./occupancy-rules";
 import { currentSeason, hemisphereOf, seasonLabel, summerNumber, type Hemisphere } from "./season-rules";
+import { RATINGS } from "@/lib/shared/rating";
 
 export const VOLUNTARY_CAVEAT =
   "These figures come only from buyers who chose to answer our end-of-season questions, so they are not a survey of every house sold; houses whose owners answered may do better or worse than the rest.";
@@ -112,7 +113,7 @@ export async function getRatingOccupancy() {
     minimumHouses: MIN_HOUSES_FOR_RATE,
     caveat: VOLUNTARY_CAVEAT,
     demo: outcomes.some((o) => o.demo && o.siteRating !== null),
-    byRating: ["good", "fair", "poor"].map((rating) => ({
+    byRating: RATINGS.map((rating) => ({
       rating,
       label: RATING_LABELS[rating]!,
       ...publicStat(byRating.get(rating) ?? occupancyStat([])),

@@ -59,6 +59,8 @@ export function dataModulesWithoutServerOnly(graph: ImportGraph): string[] {
  * status), and every raw `update orders set … status` in a template. Returns one line per write.
  */
 export function orderStatusWrites(fileName: string, text: string): string[] {
+  // Most files never name the table in an update: skip parsing them.
+  if (!/update\s*\(\s*(\w+\.)?orders\s*\)|update\s+"?orders"?\s+set/i.test(text)) return [];
   const source = ts.createSourceFile(fileName, text, ts.ScriptTarget.Latest, true, fileName.endsWith(".tsx") ? ts.ScriptKind.TSX : ts.ScriptKind.TS);
   const writes: string[] = [];
   const line = (node: ts.Node) => source.getLineAndCharacterOfPosition(node.getStart()).line + 1;

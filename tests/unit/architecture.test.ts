@@ -105,7 +105,7 @@ describe("architecture: one owner of the order lifecycle", () => {
       .flatMap((f) => orderStatusWrites(f, readFileSync(path.join(root, f), "utf8")));
     expect(writes.length).toBeGreaterThan(0);
     expect([...new Set(writes.map((w) => w.split(":")[0]))]).toEqual([ORDER_STATUS_OWNER]);
-  });
+  }, 30_000);
 
   it("finds planted status writes, and passes updates that leave the status alone", () => {
     const text = [
