@@ -7,9 +7,8 @@
 import { closeDb, getDb } from "@/db/client";
 import { importClimateIfEmpty } from "@/lib/catalog/climate-store";
 import { env } from "@/lib/config/env";
-import { seedDemo } from "@/lib/demo/commands";
+import { seedDemo, seedDemoReportQuestion } from "@/lib/demo/commands";
 import { isEmpty } from "@/lib/demo/queries";
-import { seedDemoReportQuestion } from "@/lib/demo/roost-reports";
 
 const settings = env();
 const db = await getDb();

@@ -11,7 +11,7 @@ import {
   countModelsByStatus,
   listCertificationsDue,
   listLowStockModels,
-} from "@/lib/staff/queries";
+} from "@/lib/staff/queries/models-table";
 
 export const metadata: Metadata = { title: "Workshop" };
 

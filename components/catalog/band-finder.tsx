@@ -10,6 +10,7 @@ import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
 import { SHADE_LABELS, type Shade } from "@/lib/catalog/spec";
+import { fetchJson, isApiError } from "@/lib/http/client";
 import type { ClimateAnswer } from "@/lib/catalog/climate-service";
 
 type Mode = "zip" | "temperature";
@@ -36,18 +37,17 @@ export function BandFinder({ compact = false }: { compact?: boolean }) {
     setError(null);
     const params = mode === "zip" ? `zip=${encodeURIComponent(zip.trim())}` : `${unit === "F" ? "julyHighF" : "julyHighC"}=${encodeURIComponent(temp.trim())}`;
     try {
-      const res = await fetch(`/api/climate?${params}`);
-      const body = await res.json();
-      if (!res.ok) {
+      const body = await fetchJson<ClimateAnswer>(`/api/climate?${params}`);
+      setAnswer(body);
+      rememberBand(body);
+      router.refresh();
+    } catch (error) {
+      if (isApiError(error) && error.status !== 0) {
         setAnswer(null);
-        setError({ field: mode, message: body?.error?.message ?? "That did not work; please try again." });
-        if (body?.error?.code === "unavailable") setMode("temperature");
+        setError({ field: mode, message: error.message });
+        if (error.code === "unavailable") setMode("temperature");
         return;
       }
-      setAnswer(body as ClimateAnswer);
-      rememberBand(body as ClimateAnswer);
-      router.refresh();
-    } catch {
       setError({ field: mode, message: "The store could not be reached. Check your connection and try again." });
     } finally {
       setBusy(false);

@@ -7,6 +7,7 @@ import { Checkbox } from "@/components/ui/checkbox";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Select } from "@/components/ui/select";
 import { Spinner } from "@/components/ui/spinner";
+import { fetchJson } from "@/lib/http/client";
 import { catalogQueryToParams, type CatalogQuery } from "@/lib/catalog/catalog-query";
 import { BAND_IDS, CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
 import type { HouseCard as HouseCardData } from "@/lib/catalog/house-card";
@@ -15,10 +16,7 @@ import { HouseCard } from "./house-card";
 type Result = { items: HouseCardData[]; total: number };
 
 async function fetchHouses(query: CatalogQuery): Promise<Result> {
-  const res = await fetch(`/api/houses?${catalogQueryToParams(query)}`);
-  const body = await res.json();
-  if (!res.ok) throw new Error(body?.error?.message ?? "The catalog could not be loaded.");
-  return body as Result;
+  return fetchJson<Result>(`/api/houses?${catalogQueryToParams(query)}`, { fallbackMessage: "The catalog could not be loaded." });
 }
 
 const PRICE_LIMITS = [10000, 15000, 20000, 30000];

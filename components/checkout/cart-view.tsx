@@ -15,6 +15,7 @@ import { FormError } from "@/components/ui/form-error";
 import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
 import { Spinner } from "@/components/ui/spinner";
+import { fetchJson, type ApiError } from "@/lib/http/client";
 import { cartActions, MAX_PER_LINE, useCart } from "@/lib/checkout/cart-store";
 import { formatUsd } from "@/lib/checkout/money";
 import { addressSchema, contactSchema } from "@/lib/checkout/schemas";
@@ -31,17 +32,11 @@ type QuoteResponse = {
   giftCents: number;
   totalCents: number;
 };
-type ApiError = { code: string; message: string; fields?: Record<string, string> };
 
 const detailsSchema = z.object({ contact: contactSchema, address: addressSchema.partial() });
 type Details = z.infer<typeof detailsSchema>;
 
-async function postJson<T>(url: string, body: unknown): Promise<T> {
-  const res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-  const json = await res.json();
-  if (!res.ok) throw json.error as ApiError;
-  return json as T;
-}
+const postJson = <T,>(url: string, body: unknown): Promise<T> => fetchJson<T>(url, { json: body });
 
 /** The cart: lines, delivery, gift and the buyer's details, priced by the server at every step. */
 export function CartView({ defaultContact }: { defaultContact: { name: string; email: string } | null }) {

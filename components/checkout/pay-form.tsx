@@ -7,6 +7,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/form-error";
 import { cartActions } from "@/lib/checkout/cart-store";
+import { fetchJson, isApiError } from "@/lib/http/client";
 import { formatUsd } from "@/lib/checkout/money";
 
 let stripePromise: Promise<Stripe | null> | null = null;
@@ -48,14 +49,11 @@ function PayInner({ orderId, token, totalCents, returnUrl }: { orderId: string; 
         return;
       }
       // Holds the stock again if an earlier attempt on this order failed and released it.
-      const hold = await fetch(`/api/checkout/${orderId}/hold`, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ token }),
-      });
-      if (!hold.ok) {
-        const body = await hold.json();
-        setError(body?.error?.message ?? "This order can no longer be paid.");
+      try {
+        await fetchJson(`/api/checkout/${orderId}/hold`, { json: { token }, fallbackMessage: "This order can no longer be paid." });
+      } catch (error) {
+        if (!isApiError(error)) throw error;
+        setError(error.message);
         return;
       }
       const result = await stripe.confirmPayment({ elements, confirmParams: { return_url: returnUrl }, redirect: "if_required" });

@@ -2,6 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useFieldArray, useForm, useWatch } from "react-hook-form";
+import { applyFieldErrors } from "@/lib/http/client";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
@@ -23,9 +24,7 @@ export function PackForm({ orderId, version, defaultBoxes, action }: Props) {
 
   async function submit(input: PackInput) {
     const result = await action.run(`/api/fulfillment/orders/${orderId}/pack`, input, "Boxes recorded; the order is boxed and weighed.");
-    if (!result.ok && result.fields) {
-      for (const [name, message] of Object.entries(result.fields)) form.setError(name as "boxes", { message });
-    }
+    if (!result.ok) applyFieldErrors(result, form.setError);
   }
 
   const number = { valueAsNumber: true } as const;

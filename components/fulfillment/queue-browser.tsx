@@ -10,23 +10,15 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { Spinner } from "@/components/ui/spinner";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
 import type { QueuePage, QueueSummary } from "@/lib/fulfillment/queries/queue";
+import { fetchJson, isApiError } from "@/lib/http/client";
 import { DEFAULT_QUEUE_PARAMS, queueParamsToSearch, type QueueParams, type QueueSort } from "@/lib/fulfillment/queue-params";
 import { queueColumns } from "./queue-columns";
 import { QueueCounts } from "./queue-counts";
 import { QueueFilters } from "./queue-filters";
 import { QueuePager } from "./queue-pager";
 
-class QueueError extends Error {
-  constructor(message: string, readonly fields?: Record<string, string>) {
-    super(message);
-  }
-}
-
 async function fetchQueue(search: string): Promise<QueuePage> {
-  const res = await fetch(`/api/fulfillment/orders?${search}`);
-  const body = await res.json().catch(() => null);
-  if (!res.ok) throw new QueueError(body?.error?.message ?? "The queue could not be loaded.", body?.error?.fields);
-  return body as QueuePage;
+  return fetchJson<QueuePage>(`/api/fulfillment/orders?${search}`, { fallbackMessage: "The queue could not be loaded." });
 }
 
 type Props = { initialParams: QueueParams; initialPage: QueuePage; summary: QueueSummary; now: string };
@@ -75,7 +67,7 @@ export function QueueBrowser({ initialParams, initialPage, summary, now }: Props
   const exportSearch = new URLSearchParams(search);
   exportSearch.delete("page");
   exportSearch.delete("pageSize");
-  const fields = error instanceof QueueError ? error.fields : undefined;
+  const fields = isApiError(error) ? error.fields : undefined;
 
   return (
     <div className="flex flex-col gap-6">

@@ -2,6 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm, useWatch } from "react-hook-form";
+import { applyFieldErrors } from "@/lib/http/client";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
@@ -38,9 +39,7 @@ export function ShipBoxForm({ orderId, version, box, position, action }: Props) 
       input,
       `Box ${position} is with ${CARRIER_LABELS[input.carrier]}.`,
     );
-    if (!result.ok && result.fields) {
-      for (const [name, message] of Object.entries(result.fields)) form.setError(name as keyof ShipBoxInput, { message });
-    }
+    if (!result.ok) applyFieldErrors(result, form.setError);
   }
 
   return (

@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useToast } from "@/components/ui/toast";
-import type { FieldErrors } from "@/lib/http/errors";
+import { fetchJson, isApiError, type FieldErrors } from "@/lib/http/client";
 
 export type ActionOutcome = { ok: true; data: unknown } | { ok: false; status: number; message: string; fields?: FieldErrors };
 
@@ -22,22 +22,21 @@ export function useOrderAction() {
     setPending(true);
     setError(null);
     try {
-      const res = await fetch(path, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-      const json = await res.json().catch(() => null);
-      if (res.ok) {
-        setConflict(null);
-        toast.notify({ tone: "good", title: success });
-        router.refresh();
-        return { ok: true, data: json };
-      }
-      const message: string = json?.error?.message ?? "That didn't work. Please try again.";
-      if (res.status === 409) setConflict(message);
-      else if (!json?.error?.fields) setError(message);
-      return { ok: false, status: res.status, message, fields: json?.error?.fields };
-    } catch {
-      const message = "The shipping desk could not be reached. Check the connection and try again.";
-      setError(message);
-      return { ok: false, status: 0, message };
+      const data = await fetchJson<unknown>(path, {
+        json: body,
+        fallbackMessage: "That didn't work. Please try again.",
+        offlineMessage: "The shipping desk could not be reached. Check the connection and try again.",
+      });
+      setConflict(null);
+      toast.notify({ tone: "good", title: success });
+      router.refresh();
+      return { ok: true, data };
+    } catch (error) {
+      if (!isApiError(error)) throw error;
+      const { status, message, fields } = error;
+      if (status === 409) setConflict(message);
+      else if (!fields) setError(message);
+      return { ok: false, status, message, ...(fields ? { fields } : {}) };
     } finally {
       setPending(false);
     }

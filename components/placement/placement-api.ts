@@ -1,34 +1,14 @@
 // Browser calls to the placement and saved-site routes. Errors come back as the store's one
 // error shape, so forms can put each message beside its field.
+import { fetchJson } from "@/lib/http/client";
 import type { PlacementAnswer } from "@/lib/placement/placement-answer";
 import { GUEST_SITE_TOKEN_HEADER, type SavedSiteReceipt } from "@/lib/placement/saved-site-schema";
 import type { PlacementInput } from "@/lib/placement/schema";
+import type { Rating } from "@/lib/shared/rating";
 
-export type ApiError = { code: string; message: string; fields?: Record<string, string> };
+export { ApiError } from "@/lib/http/client";
 
-const OFFLINE: ApiError = {
-  code: "network",
-  message: "The store could not be reached. Check your connection and try again.",
-};
-
-async function send<T>(url: string, init: RequestInit): Promise<T> {
-  let res: Response;
-  try {
-    res = await fetch(url, init);
-  } catch (error) {
-    if ((error as Error).name === "AbortError") throw error;
-    throw OFFLINE;
-  }
-  const body = await res.json().catch(() => null);
-  if (!res.ok)
-    throw (
-      (body?.error as ApiError | undefined) ?? {
-        code: "internal",
-        message: "That did not work; please try again.",
-      }
-    );
-  return body as T;
-}
+const send = <T>(url: string, init: RequestInit): Promise<T> => fetchJson<T>(url, init);
 
 const jsonInit = (body: unknown, signal?: AbortSignal): RequestInit => ({
   method: "POST",
@@ -50,7 +30,7 @@ export type SavedSiteDetail = {
   name: string;
   input: PlacementInput;
   result: PlacementAnswer;
-  label: "good" | "fair" | "poor";
+  label: Rating;
   bandId: string;
   createdAt: string;
 };

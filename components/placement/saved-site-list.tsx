@@ -11,11 +11,12 @@ import { isBandId } from "@/lib/catalog/band-choice";
 import { clearSavedSite, useSavedSite } from "@/lib/placement/saved-site-store";
 import { requestDeleteSite, type ApiError } from "./placement-api";
 import { STATUS_WORDS } from "./rule-list";
+import type { Rating } from "@/lib/shared/rating";
 
 export type SavedSiteRow = {
   id: string;
   name: string;
-  label: "good" | "fair" | "poor";
+  label: Rating;
   bandId: string;
   bandLabel: string;
   savedOn: string;

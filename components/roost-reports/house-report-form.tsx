@@ -8,6 +8,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { Textarea } from "@/components/ui/textarea";
+import { fetchJson, isApiError } from "@/lib/http/client";
 import { ANSWER_WORDS, COUNT_BAND_WORDS, COUNT_BANDS, isOccupiedAnswer, ROOST_ANSWERS, type RoostAnswer } from "@/lib/roost-reports/answers";
 import type { HouseQuestion } from "@/lib/roost-reports/queries";
 import { MAX_NOTE_CHARS, MOUNT_CHOICES } from "@/lib/roost-reports/report-input";
@@ -45,16 +46,24 @@ export function HouseReportForm({ question, orderId, accessToken }: { question: 
     setErrors({});
     setResult(null);
     try {
-      const response = await fetch(`/api/orders/${orderId}/roost-reports`, { method: "POST", body: form });
-      const body = (await response.json().catch(() => null)) as { outcome?: keyof typeof OUTCOME_WORDS; error?: { message: string; fields?: Record<string, string> } } | null;
-      if (!response.ok || !body?.outcome) {
-        setErrors(body?.error?.fields ?? {});
-        setResult({ tone: "poor", text: body?.error?.message ?? "Your answer could not be saved. Please try again." });
+      const body = await fetchJson<{ outcome?: keyof typeof OUTCOME_WORDS }>(`/api/orders/${orderId}/roost-reports`, {
+        method: "POST",
+        body: form,
+        fallbackMessage: "Your answer could not be saved. Please try again.",
+      });
+      if (!body?.outcome) {
+        setErrors({});
+        setResult({ tone: "poor", text: "Your answer could not be saved. Please try again." });
         return;
       }
       setResult({ tone: "good", text: OUTCOME_WORDS[body.outcome] });
       router.refresh();
-    } catch {
+    } catch (error) {
+      if (isApiError(error) && error.status !== 0) {
+        setErrors(error.fields ?? {});
+        setResult({ tone: "poor", text: error.message });
+        return;
+      }
       setResult({ tone: "poor", text: "We could not reach the store. Check your connection and try again." });
     } finally {
       setBusy(false);

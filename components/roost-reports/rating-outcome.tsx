@@ -1,8 +1,10 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import { fetchJson } from "@/lib/http/client";
 import { intervalWords, percent } from "./format";
 import { IntervalBar } from "./interval-bar";
+import type { Rating } from "@/lib/shared/rating";
 
 type RatingFigures = {
   minimumHouses: number;
@@ -12,15 +14,13 @@ type RatingFigures = {
 };
 
 async function fetchRatings(): Promise<RatingFigures> {
-  const response = await fetch("/api/roost-reports/ratings");
-  if (!response.ok) throw new Error("The figures could not be loaded.");
-  return (await response.json()) as RatingFigures;
+  return fetchJson<RatingFigures>("/api/roost-reports/ratings", { fallbackMessage: "The figures could not be loaded." });
 }
 
 const RATING_WORDS: Record<string, string> = { good: "good", fair: "fair", poor: "poor" };
 
 /** Beside a site's rating: how houses on sites with the same rating fared, from buyers' reports. */
-export function RatingOutcome({ label }: { label: "good" | "fair" | "poor" }) {
+export function RatingOutcome({ label }: { label: Rating }) {
   const { data, isError } = useQuery({ queryKey: ["roost-ratings"], queryFn: fetchRatings, staleTime: 5 * 60_000 });
   if (isError || !data) return null;
   const row = data.byRating.find((r) => r.rating === label);

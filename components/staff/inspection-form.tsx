@@ -3,7 +3,8 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm, useWatch, type Path } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
+import { applyFieldErrors } from "@/lib/http/client";
 import { recordInspectionAction } from "@/lib/staff/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
@@ -72,8 +73,7 @@ export function InspectionForm({
     setOutcome(null);
     const result = await recordInspectionAction(values);
     if (!result.ok) {
-      for (const [field, message] of Object.entries(result.error.fields ?? {}))
-        form.setError(field as Path<InspectionInput>, { message });
+      applyFieldErrors(result.error, form.setError);
       setError(result.error.message);
       return;
     }

@@ -1,7 +1,7 @@
 import { Badge } from "@/components/ui/badge";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
-import type { LedgerEntry } from "@/lib/staff/model-queries";
+import type { LedgerEntry } from "@/lib/staff/queries/model";
 
 const KIND_WORDS: Record<LedgerEntry["kind"], string> = {
   received: "Received",

@@ -1,6 +1,7 @@
 "use client";
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
+import { fetchJson } from "@/lib/http/client";
 import {
   flexRender,
   getCoreRowModel,
@@ -27,12 +28,10 @@ import { COLUMNS, NUMERIC } from "./models-table-columns";
 
 async function fetchModels(query: ModelsQuery): Promise<ModelsPage> {
   const params = new URLSearchParams(Object.entries(query).map(([k, v]) => [k, String(v)]));
-  const res = await fetch(`/api/staff/models?${params}`, {
+  return fetchJson<ModelsPage>(`/api/staff/models?${params}`, {
     headers: { accept: "application/json" },
+    fallbackMessage: "The models could not be loaded.",
   });
-  const body = (await res.json()) as ModelsPage & { error?: { message: string } };
-  if (!res.ok) throw new Error(body.error?.message ?? "The models could not be loaded.");
-  return body;
 }
 
 /** The table is drawn on the server with the first page; every change after that asks the JSON route. */

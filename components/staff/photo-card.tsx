@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { photoUrl } from "@/lib/catalog/photo-url";
-import type { StaffPhoto } from "@/lib/staff/model-queries";
+import type { StaffPhoto } from "@/lib/staff/queries/model";
 import { altTextSchema } from "@/lib/staff/photo-input";
 
 type Props = {

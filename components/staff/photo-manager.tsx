@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { fetchJson } from "@/lib/http/client";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import {
@@ -12,7 +13,7 @@ import { Button } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/dialog";
 import { EmptyState } from "@/components/ui/empty-state";
 import { useToast } from "@/components/ui/toast";
-import type { StaffPhoto } from "@/lib/staff/model-queries";
+import type { StaffPhoto } from "@/lib/staff/queries/model";
 import { altTextSchema, MAX_PHOTOS_PER_MODEL } from "@/lib/staff/photo-input";
 import {
   checkFileName,
@@ -46,11 +47,12 @@ export function PhotoManager({ slug, modelId, modelName, initialPhotos }: Props)
   const queryKey = ["staff-photos", slug];
   const { data: photos = initialPhotos } = useQuery({
     queryKey,
-    queryFn: async () => {
-      const res = await fetch(`/api/staff/models/${encodeURIComponent(slug)}/photos`);
-      if (!res.ok) throw new Error("The photos could not be loaded.");
-      return ((await res.json()) as { items: StaffPhoto[] }).items;
-    },
+    queryFn: async () =>
+      (
+        await fetchJson<{ items: StaffPhoto[] }>(`/api/staff/models/${encodeURIComponent(slug)}/photos`, {
+          fallbackMessage: "The photos could not be loaded.",
+        })
+      ).items,
     initialData: initialPhotos,
   });
   const [queue, setQueue] = useState<QueuedFile[]>([]);

@@ -4,6 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Path } from "react-hook-form";
+import { applyFieldErrors } from "@/lib/http/client";
 import { adjustStockAction, receiveStockAction } from "@/lib/staff/actions";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
@@ -60,8 +61,7 @@ export function ReceiveStockForm({
     setError(null);
     const result = await receiveStockAction(values);
     if (!result.ok) {
-      for (const [f, message] of Object.entries(result.error.fields ?? {}))
-        form.setError(f as Path<ReceiveStockInput>, { message });
+      applyFieldErrors(result.error, form.setError);
       return setError(result.error.message);
     }
     toast.notify({

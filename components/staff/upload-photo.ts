@@ -1,4 +1,5 @@
-import type { StaffPhoto } from "@/lib/staff/model-queries";
+import type { StaffPhoto } from "@/lib/staff/queries/model";
+import { errorFromBody } from "@/lib/http/client";
 
 export type UploadResult = { ok: true; photo: StaffPhoto } | { ok: false; message: string };
 
@@ -26,13 +27,13 @@ export function uploadPhoto({
       if (event.lengthComputable) onProgress(event.loaded, event.total);
     };
     xhr.onload = () => {
-      const body = xhr.response as { photo?: StaffPhoto; error?: { message: string } } | null;
+      const body = xhr.response as { photo?: StaffPhoto } | null;
       if (xhr.status >= 200 && xhr.status < 300 && body?.photo)
         resolve({ ok: true, photo: body.photo });
       else
         resolve({
           ok: false,
-          message: body?.error?.message ?? `The upload was refused (HTTP ${xhr.status}).`,
+          message: errorFromBody(xhr.status, body)?.message ?? `The upload was refused (HTTP ${xhr.status}).`,
         });
     };
     xhr.onerror = () =>

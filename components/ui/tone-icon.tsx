@@ -1,6 +1,7 @@
 import { cn } from "./cn";
+import type { Rating } from "@/lib/shared/rating";
 
-export type Tone = "neutral" | "good" | "fair" | "poor" | "info" | "warn";
+export type Tone = "neutral" | Rating | "info" | "warn";
 
 // Each tone has its own shape as well as its colour, so a status never rests on colour alone
 // (WCAG 1.4.1). Drawn with even-odd fills: the marks are holes that show the ground beneath.

@@ -2,7 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { createCustomer, setUserRole } from "@/lib/accounts/users";
+import { createCustomer, setUserRole } from "@/lib/accounts/commands";
 import { signUpSchema } from "@/lib/auth/password-policy";
 import { ROLES } from "@/lib/auth/roles";
 import { action } from "@/lib/http/action";

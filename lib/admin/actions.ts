@@ -1,7 +1,7 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { saveOrganization, saveShippingRates, saveTaxRates } from "@/lib/admin/settings";
+import { saveOrganization, saveShippingRates, saveTaxRates } from "@/lib/admin/commands";
 import { organizationSchema, shippingRatesSchema, taxRatesSchema } from "@/lib/admin/settings-schemas";
 import { action } from "@/lib/http/action";
 

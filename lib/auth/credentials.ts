@@ -1,10 +1,9 @@
-import { eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
-import { users } from "@/db/schema";
+import { recordSignInAttempt } from "./commands";
 import { signInSchema } from "./password-policy";
 import { verifyPassword } from "./passwords";
+import { countRecentSignInFailures, findUserForSignIn } from "./queries";
 import type { Role } from "./roles";
-import { checkSignInThrottle, recordSignInAttempt } from "./throttle";
+import { throttleVerdict } from "./throttle";
 
 export class SignInRefused extends Error {
   override name = "SignInRefused";
@@ -18,12 +17,11 @@ export async function authenticate(
   const parsed = signInSchema.safeParse(input);
   if (!parsed.success) throw new SignInRefused("Enter your e-mail address and password.");
   const { email, password } = parsed.data;
-  const db = await getDb();
-  const verdict = await checkSignInThrottle(db, { email, ip });
+  const verdict = throttleVerdict(await countRecentSignInFailures({ email, ip }));
   if (verdict.throttled) throw new SignInRefused(verdict.message);
-  const [user] = await db.select().from(users).where(eq(users.email, email)).limit(1);
+  const user = await findUserForSignIn({ email });
   const ok = await verifyPassword(password, user?.passwordHash ?? null);
-  await recordSignInAttempt(db, { email, ip, succeeded: ok });
+  await recordSignInAttempt({ email, ip, succeeded: ok });
   if (!ok || !user) throw new SignInRefused("That e-mail and password don't match an account here.");
   return { id: user.id, name: user.name, email: user.email, role: user.role };
 }

@@ -1,8 +1,6 @@
-import { eq } from "drizzle-orm";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
-import { getDb } from "@/db/client";
-import { users } from "@/db/schema";
+import { getUserById } from "@/lib/accounts/queries";
 import { env } from "@/lib/config/env";
 import { authenticate, clientAddress } from "./credentials";
 import { isRole } from "./roles";
@@ -30,12 +28,7 @@ export const authOptions: NextAuthOptions = {
       }
       // Re-read the role so an admin's change takes effect on the next request.
       if (typeof token.id === "string") {
-        const db = await getDb();
-        const [row] = await db
-          .select({ role: users.role, name: users.name })
-          .from(users)
-          .where(eq(users.id, token.id))
-          .limit(1);
+        const row = await getUserById({ id: token.id });
         if (!row) return { ...token, id: undefined, role: undefined };
         token.role = row.role;
         token.name = row.name;

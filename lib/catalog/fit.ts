@@ -1,5 +1,6 @@
 import { CLIMATE_BANDS, type BandId } from "./climate-bands";
 import { SHADE_LABELS, SHADES, type HouseSpec, type Shade } from "./spec";
+import type { Rating } from "@/lib/shared/rating";
 
 // How well a model suits a buyer's climate band (product brief §3). Steps count along the shade
 // scale black → dark → medium → light → white to the nearest shade that suits the band.
@@ -7,7 +8,7 @@ import { SHADE_LABELS, SHADES, type HouseSpec, type Shade } from "./spec";
 // Handbook (2004), as reproduced by agencies; one step off is fixable with paint, further is not
 // a good match (common practice, no source).
 
-export type FitLabel = "good" | "fair" | "poor";
+export type FitLabel = Rating;
 
 export type Fit = { label: FitLabel; steps: number; repaintTo?: Shade; reasons: string[] };
 

@@ -1,4 +1,5 @@
 import type { HouseSummary } from "./queries";
+import type { Rating } from "@/lib/shared/rating";
 
 /** What a catalog card needs, as the JSON API sends it. */
 export type HouseCard = {
@@ -15,7 +16,7 @@ export type HouseCard = {
   mounts: string[];
   notes: number;
   photo: HouseSummary["photo"];
-  fit?: { label: "good" | "fair" | "poor"; reasons: string[]; repaintTo?: string };
+  fit?: { label: Rating; reasons: string[]; repaintTo?: string };
   /** Roost reports (lib/roost-reports): houses reported, and the share with bats where n ≥ 5. */
   occupancy?: { n: number; shown: boolean; k?: number; rate?: number; demo: boolean };
 };

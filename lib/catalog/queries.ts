@@ -1,12 +1,13 @@
 import "server-only";
-import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
+import { and, asc, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { houseModels, inspections, modelPhotos, type HouseModelRow } from "@/db/schema";
+import { houseModels, modelPhotos, type HouseModelRow } from "@/db/schema";
 import { certificationState, CERTIFICATION_STATE_WORDS, type CertificationStateId } from "./certification";
 import type { BandId } from "./climate-bands";
 import { checkDesign, type DesignCheck } from "./design-check";
 import { fitForBand, type Fit } from "./fit";
 import { houseSpecSchema, type HouseSpec } from "./spec";
+import { getLatestInspections } from "@/lib/inspections/queries";
 
 export type CatalogFilters = {
   band?: BandId;
@@ -57,20 +58,7 @@ export type HouseDetail = HouseSummary & {
 
 type LatestInspection = { modelId: string; inspectedOn: Date; passed: boolean };
 
-async function latestInspections(modelIds: string[]): Promise<Map<string, LatestInspection>> {
-  if (modelIds.length === 0) return new Map();
-  const db = await getDb();
-  const rows = await db
-    .selectDistinctOn([inspections.modelId], {
-      modelId: inspections.modelId,
-      inspectedOn: inspections.inspectedOn,
-      passed: inspections.passed,
-    })
-    .from(inspections)
-    .where(inArray(inspections.modelId, modelIds))
-    .orderBy(inspections.modelId, desc(inspections.inspectedOn), desc(inspections.createdAt));
-  return new Map(rows.map((r) => [r.modelId, r]));
-}
+const latestInspections = (modelIds: string[]) => getLatestInspections({ modelIds });
 
 async function photosFor(modelIds: string[]): Promise<Map<string, PhotoRef[]>> {
   const map = new Map<string, PhotoRef[]>();

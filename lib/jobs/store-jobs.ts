@@ -4,8 +4,8 @@ import { retryRequestedRefunds } from "@/lib/checkout/commands/refunds";
 import { STORE_TIME_ZONE } from "@/lib/fulfillment/store-time";
 import { runMailDelivery } from "@/lib/mail/delivery-job";
 import { kickMailSender, MAIL_DELIVERY_JOB } from "@/lib/mail/kick";
-import { queueSeasonalReminders } from "@/lib/mail/seasonal-job";
-import { queueRoostReportMail } from "@/lib/roost-reports/season-job";
+import { queueSeasonalReminders } from "@/lib/mail/commands/seasonal-reminders";
+import { queueRoostReportMail } from "@/lib/roost-reports/commands";
 import { registerJob } from "./registry";
 
 // Every background job of the store, in one list. To add one: write its handler in its domain

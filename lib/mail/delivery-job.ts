@@ -1,12 +1,13 @@
 import "server-only";
 import { nudge } from "@/lib/jobs/nudge";
 import { MAIL_DELIVERY_JOB } from "./kick";
-import { deliverPendingMail, findNextMailAttempt, type DeliveryReport } from "./sender";
+import { deliverPendingMail, type DeliveryReport } from "./commands/sender";
+import { findNextMailAttempt } from "./queries/next-mail-attempt";
 
 // One run of the outbox sender, as a job: deliver what is due, in batches, then ask the queue for
 // the next run at the moment the earliest waiting message falls due (a retry after its backoff,
 // or a claim whose sender died). The outbox rows keep their own attempts, backoff and lease
-// (lib/mail/backoff.ts, sender.ts); the queue only decides when the sender runs.
+// (lib/mail/backoff.ts, commands/sender.ts); the queue only decides when the sender runs.
 
 const BATCH = 25;
 /** Enough for a busy morning in one run; the follow-up run takes the rest. Common practice, no source. */

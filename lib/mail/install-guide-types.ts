@@ -4,6 +4,7 @@ import type { Shade } from "@/lib/catalog/spec";
 import type { SkylineEffect } from "@/lib/placement/skyline-words";
 import type { Caution } from "@/lib/safety/cautions";
 import type { UpkeepSeason } from "./upkeep-calendar";
+import type { Rating } from "@/lib/shared/rating";
 
 // The shapes of the install guide: what goes in (the order's houses, climate and site) and what
 // comes out. Apart from the content rules so band-advice.ts and install-guide-content.ts can both
@@ -34,13 +35,13 @@ export type GuideClimate =
 
 export type GuideSiteRule = {
   name: string;
-  status: "good" | "fair" | "poor";
+  status: Rating;
   reason: string;
   change?: string;
 };
 export type GuideSite = {
   name: string;
-  label: "good" | "fair" | "poor";
+  label: Rating;
   rules: readonly GuideSiteRule[];
   /** What the saved check found the skyline does; null for a check that kept none. */
   skylineEffect?: SkylineEffect | null;

@@ -3,6 +3,7 @@
 import { z } from "zod";
 import type { BandId } from "@/lib/catalog/climate-bands";
 import { placementInputSchema } from "./schema";
+import type { Rating } from "@/lib/shared/rating";
 
 /** A guest proves a saved site is theirs with this header (kept out of URLs and server logs). */
 export const GUEST_SITE_TOKEN_HEADER = "x-guest-site-token";
@@ -20,7 +21,7 @@ export type SaveSite = z.infer<typeof saveSiteSchema>;
 export type SavedSiteReceipt = {
   id: string;
   name: string;
-  label: "good" | "fair" | "poor";
+  label: Rating;
   bandId: BandId;
   julyHighF: number;
   /** The 16 skyline angles saved with the site, or null when an open sky was assumed. */

@@ -4,6 +4,7 @@ import { useSyncExternalStore } from "react";
 import { z } from "zod";
 import { BAND_COOKIE, type BandChoice } from "@/lib/catalog/band-choice";
 import { BAND_IDS } from "@/lib/catalog/climate-bands";
+import { RATINGS } from "@/lib/shared/rating";
 
 // The buyer's chosen site lives in the browser beside the cart (lib/checkout/cart-store.ts), so
 // checkout can send it with the order: `siteId`, and for a guest `guestSiteToken`. The server
@@ -14,7 +15,7 @@ export const savedSiteSchema = z.object({
   id: z.uuid(),
   guestToken: z.string().min(1).max(100).optional(),
   name: z.string(),
-  label: z.enum(["good", "fair", "poor"]),
+  label: z.enum(RATINGS),
   bandId: z.enum(BAND_IDS),
 });
 export type SavedSite = z.infer<typeof savedSiteSchema>;

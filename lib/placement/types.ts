@@ -1,3 +1,5 @@
+import type { Rating } from "@/lib/shared/rating";
+
 // Shared shapes of the placement check (PRODUCT.md §4). Plain types: the rules stay free of
 // framework and validation imports; lib/placement/schema.ts validates what arrives from outside.
 
@@ -24,7 +26,7 @@ export type PlacementSite = {
 
 export type RuleId = "P1" | "P2" | "P3" | "P4" | "P5" | "P6" | "P7" | "P8" | "P9" | "P10";
 
-export type RuleStatus = "good" | "fair" | "poor";
+export type RuleStatus = Rating;
 
 export type RuleResult = {
   id: RuleId;

@@ -1,8 +1,6 @@
 import "server-only";
 import { createElement } from "react";
-import { eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
-import { roostAskOptOuts } from "@/db/schema";
 import { env } from "@/lib/config/env";
 import type { Composition } from "@/lib/mail/composition";
 import { loadOrderForMail } from "@/lib/mail/queries/order-for-mail";
@@ -12,8 +10,8 @@ import { RoostReportAdviceEmail } from "@/emails/roost-report-advice";
 import { RoostReportAskEmail } from "@/emails/roost-report-ask";
 import { ANSWER_WORDS, ROOST_ANSWERS } from "./answers";
 import { cautionsFor, emptyHouseAdvice } from "./cautions";
-import { loadHouseLines } from "./house-context";
 import { roostAdvicePayloadSchema, roostAskPayloadSchema } from "./mail-payloads";
+import { hasOptedOutOfRoostMail, loadHouseLines } from "./queries";
 import { signAnswerToken, signOptOutToken } from "./report-tokens";
 import { seasonLabel } from "./season-rules";
 import { ADVICE_KIND, ASK_KIND } from "./season-job";
@@ -38,9 +36,8 @@ async function load(db: DbOrTx, kind: string, payload: unknown) {
   const schema = kind === ASK_KIND ? roostAskPayloadSchema : roostAdvicePayloadSchema;
   const parsed = parsePayload({ schema, payload, kind });
   const data = await loadOrderForMail({ db, orderId: parsed.orderId });
-  const [optedOut] = await db.select().from(roostAskOptOuts).where(eq(roostAskOptOuts.email, data.order.email.toLowerCase()));
   // Asked to stop between queueing and sending: the wish to stop wins.
-  if (optedOut) throw new PermanentMailError("Not sent: the recipient asked for no more roost-report questions.");
+  if (await hasOptedOutOfRoostMail({ db, email: data.order.email })) throw new PermanentMailError("Not sent: the recipient asked for no more roost-report questions.");
   const lines = await loadHouseLines({ db, orderIds: [parsed.orderId] });
   const houses = parsed.houses.flatMap((h) => {
     const line = lines.find((l) => l.orderLineId === h.orderLineId);

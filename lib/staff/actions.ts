@@ -3,7 +3,7 @@
 import { revalidatePath } from "next/cache";
 import { action } from "@/lib/http/action";
 import { inspectionInputSchema } from "@/lib/staff/inspection-input";
-import { recordInspection } from "@/lib/staff/inspections";
+import { recordInspection } from "@/lib/staff/commands/inspections";
 import { modelIdSchema, modelInputSchema, updateModelSchema } from "@/lib/staff/model-input";
 import {
   createModel,
@@ -11,10 +11,10 @@ import {
   retireModel,
   returnModelToDrafts,
   updateModel,
-} from "@/lib/staff/models";
+} from "@/lib/staff/commands/models";
 import { photoAltSchema, photoIdSchema, reorderPhotosSchema } from "@/lib/staff/photo-input";
-import { removeModelPhoto, reorderModelPhotos, updatePhotoAlt } from "@/lib/staff/photos";
-import { adjustStock, receiveStock } from "@/lib/staff/stock";
+import { removeModelPhoto, reorderModelPhotos, updatePhotoAlt } from "@/lib/staff/commands/photos";
+import { adjustStock, receiveStock } from "@/lib/staff/commands/stock";
 import { adjustStockSchema, receiveStockSchema } from "@/lib/staff/stock-input";
 
 // The workshop's server actions: models, inspections, photos and stock. Each checks the session

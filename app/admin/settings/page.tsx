@@ -4,7 +4,7 @@ import { ShippingRatesForm } from "@/components/admin/shipping-rates-form";
 import { TaxRatesForm } from "@/components/admin/tax-rates-form";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { Card } from "@/components/ui/card";
-import { getOrganization, listShippingRates, listTaxRates } from "@/lib/admin/settings";
+import { getOrganization, listShippingRates, listTaxRates } from "@/lib/admin/queries";
 import { requirePageUser } from "@/lib/auth/guard";
 import type { UsState } from "@/lib/checkout/us-states";
 

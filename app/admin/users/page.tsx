@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { RoleForm } from "@/components/admin/role-form";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
-import { listUsers } from "@/lib/accounts/users";
+import { listUsers } from "@/lib/accounts/queries";
 import { requirePageUser } from "@/lib/auth/guard";
 
 export const metadata: Metadata = { title: "Accounts and roles" };

@@ -3,7 +3,8 @@ import { AppError } from "@/lib/http/errors";
 import { parseJson, route } from "@/lib/http/route";
 import { saveSiteSchema, type SavedSiteReceipt } from "@/lib/placement/saved-site-schema";
 import { checkSite } from "@/lib/placement/site-service";
-import { createSite, listSitesByUser } from "@/lib/placement/sites";
+import { createSite } from "@/lib/placement/commands";
+import { listSitesByUser } from "@/lib/placement/queries";
 
 export const dynamic = "force-dynamic";
 

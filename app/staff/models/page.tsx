@@ -4,7 +4,7 @@ import { ModelsTable } from "@/components/staff/models-table";
 import { ButtonLink } from "@/components/ui/button";
 import { requirePageUser } from "@/lib/auth/guard";
 import { applyModelsQuery, DEFAULT_MODELS_QUERY } from "@/lib/staff/models-table-query";
-import { listStaffModelRows } from "@/lib/staff/queries";
+import { listStaffModelRows } from "@/lib/staff/queries/models-table";
 
 export const metadata: Metadata = { title: "House models" };
 

@@ -7,7 +7,7 @@ import type { SessionUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/http/errors";
 import { changeOrderStatus, openOrder, SYSTEM_ACTOR, type NewOrderValues } from "@/lib/orders/commands";
 import { StaleOrderError } from "@/lib/orders/refusals";
-import { moveStock } from "@/lib/stock/ledger";
+import { moveStock } from "@/lib/stock/commands";
 import { getPayments } from "../payments";
 import { quoteFromDatabase } from "../queries/quote";
 import type { CheckoutRequest } from "../schemas";

@@ -7,7 +7,7 @@ import { AppError } from "@/lib/http/errors";
 import { withOutbox } from "@/lib/mail/commands/outbox";
 import { changeOrderStatus, recordOrderEvent, SYSTEM_ACTOR } from "@/lib/orders/commands";
 import { TransitionRefused } from "@/lib/orders/refusals";
-import { moveStock } from "@/lib/stock/ledger";
+import { moveStock } from "@/lib/stock/commands";
 import { formatOrderNumber } from "../order-number";
 import { releaseLines } from "./orders";
 import { requestRefund, settleRefund } from "./refunds";

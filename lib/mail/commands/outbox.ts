@@ -12,7 +12,7 @@ export type OutboxMessage = OutboxMessageInput;
  * Writes a message to the outbox inside the caller's transaction, so the message exists
  * exactly when the event that causes it commits. The kind must be one of MESSAGE_KINDS and the
  * payload must match its schema (lib/mail/payloads.ts): anything else throws InvalidMessageError
- * and fails the caller's transaction. The sender (lib/mail/sender.ts) delivers it.
+ * and fails the caller's transaction. The sender (lib/mail/commands/sender.ts) delivers it.
  */
 export async function enqueueEmail(tx: DbOrTx, message: OutboxMessage): Promise<void> {
   const { kind, payload } = validateMessage(message);

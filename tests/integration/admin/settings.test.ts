@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it, vi } from "vitest";
 import { seedDemo } from "@/lib/demo/commands";
 import { DEMO_ORGANIZATION } from "@/lib/demo/seed-data";
-import { getOrganization, listShippingRates } from "@/lib/admin/settings";
+import { getOrganization, listShippingRates } from "@/lib/admin/queries";
 import { quoteFromDatabase } from "@/lib/checkout/queries/quote";
 import type { SessionUser } from "@/lib/auth/session";
 import { resetDb } from "../../support/db";

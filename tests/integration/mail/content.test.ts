@@ -7,7 +7,7 @@ import { DEMO_ORGANIZATION } from "@/lib/demo/seed-data";
 import { formatUsd } from "@/lib/checkout/money";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { renderOutboxMessage } from "@/lib/mail/render-message";
-import { deliverPendingMail } from "@/lib/mail/sender";
+import { deliverPendingMail } from "@/lib/mail/commands/sender";
 import { CAUTIONS } from "@/lib/safety/cautions";
 import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";

@@ -5,7 +5,7 @@ import { outbox } from "@/db/schema";
 import { seedDemo } from "@/lib/demo/commands";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { MAX_ATTEMPTS } from "@/lib/mail/backoff";
-import { deliverPendingMail } from "@/lib/mail/sender";
+import { deliverPendingMail } from "@/lib/mail/commands/sender";
 import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";
 import { startTestPayments } from "../../support/payments";

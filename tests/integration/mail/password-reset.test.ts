@@ -8,7 +8,7 @@ import { verifyPassword } from "@/lib/auth/passwords";
 import { AppError } from "@/lib/http/errors";
 import { requestPasswordReset, resetPassword, RESET_REQUESTS_PER_HOUR } from "@/lib/mail/commands/password-reset";
 import { checkResetToken } from "@/lib/mail/queries/password-reset";
-import { deliverPendingMail } from "@/lib/mail/sender";
+import { deliverPendingMail } from "@/lib/mail/commands/sender";
 import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";
 import { clearInbox, startTestMail } from "./helpers";

@@ -7,7 +7,7 @@ import { requirePageUser } from "@/lib/auth/guard";
 import { isBandId } from "@/lib/catalog/band-choice";
 import { CLIMATE_BANDS } from "@/lib/catalog/climate-bands";
 import { describeSkylineEffect, skylineEffectSchema } from "@/lib/placement/skyline-words";
-import { listSitesByUser } from "@/lib/placement/sites";
+import { listSitesByUser } from "@/lib/placement/queries";
 
 export const metadata: Metadata = { title: "Your saved sites" };
 

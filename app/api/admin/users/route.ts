@@ -1,4 +1,4 @@
-import { listUsers } from "@/lib/accounts/users";
+import { listUsers } from "@/lib/accounts/queries";
 import { route } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";

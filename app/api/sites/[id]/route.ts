@@ -2,7 +2,9 @@ import { getSessionUser } from "@/lib/auth/session";
 import { AppError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { GUEST_SITE_TOKEN_HEADER } from "@/lib/placement/saved-site-schema";
-import { deleteSiteForViewer, getSiteForViewer, type SiteViewer } from "@/lib/placement/sites";
+import { deleteSiteForViewer } from "@/lib/placement/commands";
+import { getSiteForViewer } from "@/lib/placement/queries";
+import type { SiteViewer } from "@/lib/placement/sites";
 
 export const dynamic = "force-dynamic";
 

@@ -1,6 +1,6 @@
 import { parseQuery, route } from "@/lib/http/route";
 import { applyModelsQuery, modelsQuerySchema } from "@/lib/staff/models-table-query";
-import { listStaffModelRows } from "@/lib/staff/queries";
+import { listStaffModelRows } from "@/lib/staff/queries/models-table";
 
 export const dynamic = "force-dynamic";
 

@@ -5,7 +5,7 @@ import { PageShell } from "@/components/page-header";
 import { ModelTabs } from "@/components/staff/model-tabs";
 import { CertificationBadge, ModelStatusBadge } from "@/components/staff/status-badges";
 import { requirePageUser } from "@/lib/auth/guard";
-import { getModelTabCounts, getStaffModelBySlug } from "@/lib/staff/model-queries";
+import { getModelTabCounts, getStaffModelBySlug } from "@/lib/staff/queries/model";
 
 // The frame of one model's pages: its name, where it stands, and its sections.
 export default async function StaffModelLayout({

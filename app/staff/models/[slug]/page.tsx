@@ -5,7 +5,7 @@ import { ModelStatusPanel } from "@/components/staff/model-status-panel";
 import { formatDay } from "@/components/staff/status-badges";
 import { Alert } from "@/components/ui/alert";
 import { requirePageUser } from "@/lib/auth/guard";
-import { getStaffModelBySlug } from "@/lib/staff/model-queries";
+import { getStaffModelBySlug } from "@/lib/staff/queries/model";
 
 export const metadata: Metadata = { title: "Edit model" };
 

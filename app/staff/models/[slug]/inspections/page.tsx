@@ -7,7 +7,7 @@ import { Badge } from "@/components/ui/badge";
 import { EmptyState } from "@/components/ui/empty-state";
 import { requirePageUser } from "@/lib/auth/guard";
 import { CERTIFICATION_NAME } from "@/lib/catalog/certification";
-import { getStaffModelBySlug, listInspections } from "@/lib/staff/model-queries";
+import { getStaffModelBySlug, listInspections } from "@/lib/staff/queries/model";
 
 export const metadata: Metadata = { title: "Inspections" };
 

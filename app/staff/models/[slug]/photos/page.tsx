@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { PhotoManager } from "@/components/staff/photo-manager";
 import { requirePageUser } from "@/lib/auth/guard";
-import { getStaffModelBySlug, listModelPhotos } from "@/lib/staff/model-queries";
+import { getStaffModelBySlug, listModelPhotos } from "@/lib/staff/queries/model";
 
 export const metadata: Metadata = { title: "Model photos" };
 

@@ -4,7 +4,7 @@ import { LedgerTable } from "@/components/staff/ledger-table";
 import { AdjustStockForm, ReceiveStockForm } from "@/components/staff/stock-forms";
 import { Card } from "@/components/ui/card";
 import { requirePageUser } from "@/lib/auth/guard";
-import { getStaffModelBySlug, listStockMovements } from "@/lib/staff/model-queries";
+import { getStaffModelBySlug, listStockMovements } from "@/lib/staff/queries/model";
 
 export const metadata: Metadata = { title: "Stock ledger" };
 

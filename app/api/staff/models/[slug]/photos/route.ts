@@ -1,8 +1,8 @@
 import { AppError, badInput } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { getStaffModelBySlug, listModelPhotos } from "@/lib/staff/model-queries";
+import { getStaffModelBySlug, listModelPhotos } from "@/lib/staff/queries/model";
 import { photoUploadFieldsSchema } from "@/lib/staff/photo-input";
-import { addModelPhoto } from "@/lib/staff/photos";
+import { addModelPhoto } from "@/lib/staff/commands/photos";
 import { readLimitedBody } from "@/lib/uploads/read-limited-body";
 import { MAX_UPLOAD_BYTES } from "@/lib/uploads/upload-rules";
 

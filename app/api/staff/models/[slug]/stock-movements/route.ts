@@ -1,6 +1,6 @@
 import { AppError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
-import { getStaffModelBySlug, listStockMovements } from "@/lib/staff/model-queries";
+import { getStaffModelBySlug, listStockMovements } from "@/lib/staff/queries/model";
 
 export const dynamic = "force-dynamic";
 

@@ -5,7 +5,7 @@ import { houseModels, inspections } from "@/db/schema";
 import { evaluateInspection, type InspectionResult } from "@/lib/catalog/certification";
 import { houseSpecSchema } from "@/lib/catalog/spec";
 import { AppError } from "@/lib/http/errors";
-import { inspectionMoment, type InspectionInput } from "./inspection-input";
+import { inspectionMoment, type InspectionInput } from "../inspection-input";
 
 /**
  * Records the measured values of a built unit. The result is computed here from the listed spec

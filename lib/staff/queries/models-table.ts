@@ -5,8 +5,8 @@ import { houseModels, modelPhotos } from "@/db/schema";
 import { certificationFor } from "@/lib/catalog/queries";
 import { checkDesign } from "@/lib/catalog/design-check";
 import { houseSpecSchema } from "@/lib/catalog/spec";
-import { getLatestInspections } from "./latest-inspections";
-import type { StaffModelRow } from "./models-table-query";
+import { getLatestInspections } from "@/lib/inspections/queries";
+import type { StaffModelRow } from "../models-table-query";
 
 export async function countModelsByStatus(): Promise<
   Record<"draft" | "published" | "retired", number>

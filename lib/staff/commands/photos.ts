@@ -6,8 +6,8 @@ import { AppError } from "@/lib/http/errors";
 import { deleteImages, putImages } from "@/lib/uploads/object-store";
 import { newPhotoKeyBase, photoObjectKey } from "@/lib/uploads/photo-keys";
 import { prepareImage } from "@/lib/uploads/prepare-image";
-import type { StaffPhoto } from "./model-queries";
-import { MAX_PHOTOS_PER_MODEL, type PhotoAltInput, type ReorderPhotosInput } from "./photo-input";
+import type { StaffPhoto } from "../queries/model";
+import { MAX_PHOTOS_PER_MODEL, type PhotoAltInput, type ReorderPhotosInput } from "../photo-input";
 
 const toPhoto = (r: typeof modelPhotos.$inferSelect): StaffPhoto => ({
   id: r.id,

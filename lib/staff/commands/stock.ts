@@ -1,9 +1,9 @@
 import "server-only";
 import { getDb } from "@/db/client";
-import { moveStock } from "@/lib/stock/ledger";
-import { ledgerReason, type AdjustStockInput, type ReceiveStockInput } from "./stock-input";
+import { moveStock } from "@/lib/stock/commands";
+import { ledgerReason, type AdjustStockInput, type ReceiveStockInput } from "../stock-input";
 
-// Staff stock changes, each one movement in the ledger through moveStock (lib/stock/ledger.ts):
+// Staff stock changes, each one movement in the ledger through moveStock (lib/stock/commands.ts):
 // a conditional update that never takes stock below zero, backed by a CHECK constraint.
 
 export async function receiveStock({

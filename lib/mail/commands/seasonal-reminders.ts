@@ -2,9 +2,9 @@ import "server-only";
 import { count, eq, like } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { emailPreferences, outbox, users } from "@/db/schema";
-import { getUpkeepSeason } from "./upkeep-calendar";
-import { enqueueEmail } from "./commands/outbox";
-import { findDueReminder, type DueReminder } from "./seasons";
+import { getUpkeepSeason } from "../upkeep-calendar";
+import { enqueueEmail } from "./outbox";
+import { findDueReminder, type DueReminder } from "../seasons";
 
 /**
  * Queues the seasonal reminder that is due on `now` for every customer who asked for reminders.

@@ -4,9 +4,9 @@ import { getDb, type Tx } from "@/db/client";
 import { houseModels, type HouseModelRow } from "@/db/schema";
 import { houseSpecSchema } from "@/lib/catalog/spec";
 import { AppError } from "@/lib/http/errors";
-import { getLatestInspections } from "./latest-inspections";
-import { firstFreeSlug, slugify, type ModelInput, type UpdateModelInput } from "./model-input";
-import { publishRefusals } from "./publishing";
+import { getLatestInspections } from "@/lib/inspections/queries";
+import { firstFreeSlug, slugify, type ModelInput, type UpdateModelInput } from "../model-input";
+import { publishRefusals } from "../publishing";
 
 function columns(input: ModelInput) {
   return {

@@ -1,13 +1,13 @@
 import "server-only";
-import { and, asc, eq, lte, min, sql } from "drizzle-orm";
+import { and, asc, eq, lte, sql } from "drizzle-orm";
 import { getDb, type Db } from "@/db/client";
 import { outbox, type OutboxRow } from "@/db/schema";
 import { env } from "@/lib/config/env";
-import { planRetry } from "./backoff";
-import { getMailClient } from "./mail-client";
-import { PermanentMailError } from "./payloads";
-import { renderOutboxMessage } from "./render-message";
-import { classifySendError } from "./send-outcome";
+import { planRetry } from "../backoff";
+import { getMailClient } from "../mail-client";
+import { PermanentMailError } from "../payloads";
+import { renderOutboxMessage } from "../render-message";
+import { classifySendError } from "../send-outcome";
 
 // The outbox sender. Each message is claimed with one conditional UPDATE (pending, due, and not
 // claimed by anyone else), which moves its next attempt a lease ahead; only the sender whose
@@ -129,14 +129,4 @@ export async function deliverPendingMail({
     report[await deliverOne(db, row, now)] += 1;
   }
   return report;
-}
-
-/** When the earliest pending message is next due (a retry, or a claim's lease running out), or null when none waits. */
-export async function findNextMailAttempt(): Promise<Date | null> {
-  const db = await getDb();
-  const [row] = await db
-    .select({ at: min(outbox.nextAttemptAt) })
-    .from(outbox)
-    .where(eq(outbox.status, "pending"));
-  return row?.at ?? null;
 }

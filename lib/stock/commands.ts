@@ -1,3 +1,4 @@
+import "server-only";
 import { and, eq, gte, sql } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { houseModels, stockMovements } from "@/db/schema";

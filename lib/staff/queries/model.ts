@@ -17,9 +17,9 @@ import {
   type InspectionResult,
 } from "@/lib/catalog/certification";
 import { houseSpecSchema, type HouseSpec } from "@/lib/catalog/spec";
-import { getLatestInspections, type LatestInspectionRow } from "./latest-inspections";
-import type { ModelInput } from "./model-input";
-import { publishRefusals } from "./publishing";
+import { getLatestInspections, type LatestInspectionRow } from "@/lib/inspections/queries";
+import type { ModelInput } from "../model-input";
+import { publishRefusals } from "../publishing";
 
 export type StaffModel = {
   row: HouseModelRow;

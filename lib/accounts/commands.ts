@@ -1,13 +1,12 @@
 import "server-only";
-import { asc, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { users } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/passwords";
 import type { SignUp } from "@/lib/auth/password-policy";
 import type { Role } from "@/lib/auth/roles";
 import { AppError } from "@/lib/http/errors";
-
-export type UserSummary = { id: string; email: string; name: string; role: Role; createdAt: Date };
+import type { UserSummary } from "./queries";
 
 export async function createCustomer({ name, email, password }: SignUp): Promise<UserSummary> {
   const db = await getDb();
@@ -22,24 +21,6 @@ export async function createCustomer({ name, email, password }: SignUp): Promise
     });
   }
   return { id: row.id, email: row.email, name: row.name, role: row.role, createdAt: row.createdAt };
-}
-
-export async function listUsers(): Promise<UserSummary[]> {
-  const db = await getDb();
-  return db
-    .select({ id: users.id, email: users.email, name: users.name, role: users.role, createdAt: users.createdAt })
-    .from(users)
-    .orderBy(asc(users.email));
-}
-
-export async function getUserById({ id }: { id: string }): Promise<UserSummary | null> {
-  const db = await getDb();
-  const [row] = await db
-    .select({ id: users.id, email: users.email, name: users.name, role: users.role, createdAt: users.createdAt })
-    .from(users)
-    .where(eq(users.id, id))
-    .limit(1);
-  return row ?? null;
 }
 
 export async function setUserRole({ id, role, actorId }: { id: string; role: Role; actorId: string }) {

@@ -1,14 +1,20 @@
 import "server-only";
 import { desc, inArray } from "drizzle-orm";
-import type { DbOrTx } from "@/db/client";
+import { getDb, type DbOrTx } from "@/db/client";
 import { inspections } from "@/db/schema";
-import { inspectionMeasurementsSchema } from "@/lib/catalog/certification";
-import type { LatestInspection } from "./publishing";
+import { inspectionMeasurementsSchema, type InspectionMeasurements } from "@/lib/catalog/certification";
 
-export type LatestInspectionRow = LatestInspection & {
+// The one query for "the latest inspection of each model": the catalog's certification, the
+// staff pages and the publish checks all read it here, so they can never disagree on which
+// inspection counts.
+
+export type LatestInspectionRow = {
   id: string;
   modelId: string;
   inspector: string;
+  inspectedOn: Date;
+  passed: boolean;
+  measured: InspectionMeasurements;
 };
 
 /** The latest inspection of each model (by inspection day, then by when it was recorded). */
@@ -16,11 +22,13 @@ export async function getLatestInspections({
   db,
   modelIds,
 }: {
-  db: DbOrTx;
+  /** The caller's transaction when the answer must agree with its other reads; else the app's database. */
+  db?: DbOrTx;
   modelIds: string[];
 }): Promise<Map<string, LatestInspectionRow>> {
   if (modelIds.length === 0) return new Map();
-  const rows = await db
+  const reader = db ?? (await getDb());
+  const rows = await reader
     .selectDistinctOn([inspections.modelId])
     .from(inspections)
     .where(inArray(inspections.modelId, modelIds))
