@@ -194,7 +194,11 @@ export const climateStations = pgTable("climate_stations", {
   lat: doublePrecision("lat").notNull(),
   lon: doublePrecision("lon").notNull(),
   julyHighF: doublePrecision("july_high_f").notNull(),
+  /** The July value's completeness flag (C, S, R, P, Q). */
   flag: text("flag").notNull(),
+  /** The January normal daily high, °F: the warmest month south of the equator; null where NOAA has none. */
+  janHighF: doublePrecision("jan_high_f"),
+  janFlag: text("jan_flag"),
 });
 
 export const shippingRates = pgTable(

@@ -2,16 +2,17 @@ import "server-only";
 import { z } from "zod";
 import type { OrderRow, SiteRow } from "@/db/schema";
 import { BAND_IDS, nearBandEdge } from "@/lib/catalog/climate-bands";
-import { climateForZip } from "@/lib/catalog/climate-lookup";
-import { getStationIndex } from "@/lib/catalog/climate-service";
+import { lookupClimate } from "@/lib/climate/queries";
+import { hemisphereAt, warmestMonthOf, type Hemisphere } from "@/lib/climate/warmest-month";
 import { skylineEffectSchema } from "@/lib/placement/skyline-words";
 import type { GuideClimate, GuideSite } from "./install-guide-content";
 import type { OrgFooter } from "./message-types";
 
 // Which summers the install guide is written for, in order of trust: the buyer's saved site
 // check (they told us where the house goes), else the ship-to ZIP, else, for a pickup, the
-// center's own ZIP. The saved site's JSON is written by lib/placement; only the fields the
-// guide needs are read, leniently, so a newer site format does not stop the guide.
+// center's own ZIP; every lookup goes through lib/climate. The saved site's JSON is written by
+// lib/placement; only the fields the guide needs are read, leniently, so a newer site format does
+// not stop the guide.
 
 const ruleSchema = z.object({
   name: z.string(),
@@ -23,13 +24,13 @@ const siteInputSchema = z.looseObject({
   lat: z.number().optional(),
   julyHighF: z.number().nullish(),
 });
-// A saved site's result is the placement answer (lib/placement/placement-answer.ts): the July
-// high sits under `climate`, the hemisphere under `location`.
+// A saved site's result is the placement answer (lib/placement/placement-answer.ts): the value
+// sits under `climate`, the hemisphere under `location`.
 const siteResultSchema = z.looseObject({
   label: z.enum(["good", "fair", "poor"]).optional(),
   julyHighF: z.number().nullish(),
   climate: z.looseObject({ julyHighF: z.number().nullish() }).optional(),
-  location: z.looseObject({ hemisphere: z.enum(["north", "south"]).optional() }).optional(),
+  location: z.looseObject({ lat: z.number().optional(), hemisphere: z.enum(["north", "south"]).optional() }).optional(),
   rules: z.array(ruleSchema).catch([]),
   sun: z
     .looseObject({ skyline: z.looseObject({ effect: skylineEffectSchema }) })
@@ -42,7 +43,7 @@ const addressSchema = z.looseObject({ zip: z.string() });
 export type GuideContext = {
   climate: GuideClimate;
   site: GuideSite | null;
-  hemisphere: "north" | "south";
+  hemisphere: Hemisphere;
 };
 
 function fromSite(site: SiteRow): GuideContext | null {
@@ -50,19 +51,22 @@ function fromSite(site: SiteRow): GuideContext | null {
   if (!bandId) return null;
   const input = siteInputSchema.safeParse(site.input);
   const result = siteResultSchema.safeParse(site.result);
-  const julyHighF =
+  const valueF =
     (result.success ? (result.data.climate?.julyHighF ?? result.data.julyHighF) : null) ??
     (input.success ? input.data.julyHighF : null) ??
     null;
   const label = result.success ? (result.data.label ?? (site.label as GuideSite["label"])) : null;
-  const lat = input.success ? input.data.lat : undefined;
+  const lat = (input.success ? input.data.lat : undefined) ?? (result.success ? result.data.location?.lat : undefined);
+  const hemisphere =
+    (result.success ? result.data.location?.hemisphere : undefined) ?? (lat !== undefined ? hemisphereAt(lat) : "north");
   return {
     climate: {
       known: true,
       bandId,
-      julyHighF,
+      julyHighF: valueF,
+      warmestMonth: warmestMonthOf(hemisphere),
       basis: `your saved site check "${site.name}"`,
-      nearEdgeNote: julyHighF === null ? null : (nearBandEdge(julyHighF)?.note ?? null),
+      nearEdgeNote: valueF === null ? null : (nearBandEdge(valueF)?.note ?? null),
     },
     site:
       result.success && label && ["good", "fair", "poor"].includes(label)
@@ -73,32 +77,35 @@ function fromSite(site: SiteRow): GuideContext | null {
             skylineEffect: result.data.sun?.skyline.effect ?? null,
           }
         : null,
-    hemisphere: (result.success ? result.data.location?.hemisphere : undefined) ?? (lat !== undefined && lat < 0 ? "south" : "north"),
+    hemisphere,
   };
 }
 
-async function fromZip({ zip, basis }: { zip: string; basis: string }): Promise<GuideClimate> {
-  const index = await getStationIndex();
-  if (!index) {
-    return {
-      known: false,
-      reason:
-        "We could not look up your summers just now (our climate tables are not loaded), so here is the advice for every band; pick the line for your average July high.",
-    };
-  }
-  const found = climateForZip(index, zip);
+async function fromZip({ zip, basis }: { zip: string; basis: string }): Promise<{ climate: GuideClimate; hemisphere: Hemisphere }> {
+  const found = await lookupClimate({ zip });
   if (!found.ok) {
     return {
-      known: false,
-      reason: `We could not place ZIP ${zip} on our climate map, so here is the advice for every band; pick the line for your average July high (our climate page finds it from any U.S. ZIP code).`,
+      climate: {
+        known: false,
+        reason:
+          found.code === "no-station-data"
+            ? "We could not look up your summers just now, so here is the advice for every band; pick the line for the average daily high of your warmest month."
+            : `We could not place ZIP ${zip} on our climate map, so here is the advice for every band; pick the line for the average daily high of your warmest month (our climate page finds it from any U.S. ZIP code).`,
+      },
+      hemisphere: "north",
     };
   }
+  const { climate } = found;
   return {
-    known: true,
-    bandId: found.band.id,
-    julyHighF: found.julyHighF,
-    basis,
-    nearEdgeNote: found.nearEdge?.note ?? null,
+    climate: {
+      known: true,
+      bandId: climate.band.id,
+      julyHighF: climate.valueF,
+      warmestMonth: climate.warmestMonth,
+      basis,
+      nearEdgeNote: climate.nearEdge?.note ?? null,
+    },
+    hemisphere: climate.hemisphere,
   };
 }
 
@@ -117,21 +124,16 @@ export async function resolveGuideContext({
   if (order.method === "parcel" && shipTo.success) {
     const zip = shipTo.data.zip.slice(0, 5);
     return {
-      climate: await fromZip({
-        zip,
-        basis: `the climate normals near ZIP ${zip}, where we ship your order`,
-      }),
+      ...(await fromZip({ zip, basis: `the climate normals near ZIP ${zip}, where we ship your order` })),
       site: null,
-      hemisphere: "north",
     };
   }
   const zip = org.zip.slice(0, 5);
   return {
-    climate: await fromZip({
+    ...(await fromZip({
       zip,
       basis: `the climate normals near ZIP ${zip}, where you pick up your order (if the house goes somewhere with hotter or cooler summers, check your band on our climate page)`,
-    }),
+    })),
     site: null,
-    hemisphere: "north",
   };
 }
