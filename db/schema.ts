@@ -252,6 +252,16 @@ export const orders = pgTable(
     paidAt: timestamp("paid_at", { withTimezone: true, mode: "date" }),
     /** The saved site check that goes with the order (lib/placement), if any. */
     siteId: uuid("site_id"),
+    /** The climate band the buyer saw when they checked out (lib/climate/order-band.ts); null when none was chosen. */
+    bandId: text("band_id"),
+    /** Where that band came from: zip, typed, site, chosen (picked from the list) or none. */
+    bandSource: text("band_source"),
+    /** The warmest month's average daily high behind the band, °F, unrounded. */
+    bandValueF: doublePrecision("band_value_f"),
+    bandZip: text("band_zip"),
+    /** What the buyer typed, in their unit ("F" or "C"). */
+    bandTypedValue: doublePrecision("band_typed_value"),
+    bandTypedUnit: text("band_typed_unit"),
     /** Bumped on every state change; a stale version loses (two volunteers at once). */
     version: integer("version").notNull().default(0),
     ...timestamps,

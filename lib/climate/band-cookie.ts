@@ -68,12 +68,17 @@ export function bandChoiceFromList(id: BandId, current: BandChoice | null): Band
   return { id, source: "chosen" };
 }
 
-export function readBandChoiceInBrowser(): BandChoice | null {
-  const raw = document.cookie
-    .split("; ")
+/** The choice in a Cookie header (a route handler's request) or in document.cookie. */
+export function bandChoiceFromCookieHeader(header: string | null | undefined): BandChoice | null {
+  const raw = (header ?? "")
+    .split(/;\s*/)
     .find((c) => c.startsWith(`${BAND_COOKIE}=`))
     ?.slice(BAND_COOKIE.length + 1);
   return parseBandChoice(raw);
+}
+
+export function readBandChoiceInBrowser(): BandChoice | null {
+  return bandChoiceFromCookieHeader(document.cookie);
 }
 
 /** Browser only: remembers the choice for the whole store. */

@@ -2,6 +2,7 @@ import "server-only";
 import { z } from "zod";
 import type { OrderRow, SiteRow } from "@/db/schema";
 import { BAND_IDS, nearBandEdge } from "@/lib/catalog/climate-bands";
+import { orderBandWords } from "@/lib/climate/order-band";
 import { lookupClimate } from "@/lib/climate/queries";
 import { hemisphereAt, warmestMonthOf, type Hemisphere } from "@/lib/climate/warmest-month";
 import { skylineEffectSchema } from "@/lib/placement/skyline-words";
@@ -109,7 +110,37 @@ async function fromZip({ zip, basis }: { zip: string; basis: string }): Promise<
   };
 }
 
+/**
+ * The band stored on the order at checkout (the one the catalog showed) wins: the guide says what
+ * the catalog said. The site, or else the ZIP, still gives the hemisphere and the site's rules.
+ */
 export async function resolveGuideContext({
+  order,
+  site,
+  org,
+}: {
+  order: OrderRow;
+  site: SiteRow | null;
+  org: OrgFooter;
+}): Promise<GuideContext> {
+  const fallback = await resolveFallbackContext({ order, site, org });
+  const stored = orderBandWords(order);
+  if (!stored) return fallback;
+  const valueF = order.bandValueF ?? null;
+  return {
+    ...fallback,
+    climate: {
+      known: true,
+      bandId: stored.bandId,
+      julyHighF: valueF,
+      warmestMonth: warmestMonthOf(fallback.hemisphere),
+      basis: stored.basis,
+      nearEdgeNote: valueF === null ? null : (nearBandEdge(valueF)?.note ?? null),
+    },
+  };
+}
+
+async function resolveFallbackContext({
   order,
   site,
   org,
