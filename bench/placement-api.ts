@@ -32,14 +32,13 @@ process.env.DATABASE_URL ??= "memory://";
 const SECONDS = Number(process.argv[2] ?? 10);
 
 const { getDb, closeDb } = await import("@/db/client");
-const { importClimate } = await import("@/lib/catalog/climate-store");
-const { env } = await import("@/lib/config/env");
+const { loadClimateTableIfNeeded } = await import("@/lib/climate/commands");
 const { POST } = await import("@/app/api/placement/route");
 
 const started = performance.now();
-const imported = await importClimate(await getDb(), env().NOAA_DIR);
+const imported = await loadClimateTableIfNeeded(await getDb());
 console.log(
-  `in-memory database with ${imported.stations} NOAA stations ready in ${Math.round(performance.now() - started)} ms`,
+  `in-memory database with ${imported.loaded} NOAA stations ready in ${Math.round(performance.now() - started)} ms`,
 );
 
 async function readBody(req: IncomingMessage): Promise<string> {

@@ -194,7 +194,11 @@ export const climateStations = pgTable("climate_stations", {
   lat: doublePrecision("lat").notNull(),
   lon: doublePrecision("lon").notNull(),
   julyHighF: doublePrecision("july_high_f").notNull(),
+  /** The July value's completeness flag (C, S, R, P, Q). */
   flag: text("flag").notNull(),
+  /** The January normal daily high, °F: the warmest month south of the equator; null where NOAA has none. */
+  janHighF: doublePrecision("jan_high_f"),
+  janFlag: text("jan_flag"),
 });
 
 export const shippingRates = pgTable(
@@ -248,6 +252,16 @@ export const orders = pgTable(
     paidAt: timestamp("paid_at", { withTimezone: true, mode: "date" }),
     /** The saved site check that goes with the order (lib/placement), if any. */
     siteId: uuid("site_id"),
+    /** The climate band the buyer saw when they checked out (lib/climate/order-band.ts); null when none was chosen. */
+    bandId: text("band_id"),
+    /** Where that band came from: zip, typed, site, chosen (picked from the list) or none. */
+    bandSource: text("band_source"),
+    /** The warmest month's average daily high behind the band, °F, unrounded. */
+    bandValueF: doublePrecision("band_value_f"),
+    bandZip: text("band_zip"),
+    /** What the buyer typed, in their unit ("F" or "C"). */
+    bandTypedValue: doublePrecision("band_typed_value"),
+    bandTypedUnit: text("band_typed_unit"),
     /** Bumped on every state change; a stale version loses (two volunteers at once). */
     version: integer("version").notNull().default(0),
     ...timestamps,

@@ -16,6 +16,8 @@ export type OrderConfirmationProps = {
   shipTo: string | null;
   amounts: OrderAmounts;
   receipt: ReceiptView;
+  /** The climate band stored on the order (the one the catalog showed), in words. */
+  band?: { label: string; basis: string } | null;
 };
 
 function amountRows({
@@ -77,7 +79,12 @@ export function OrderConfirmationEmail(props: OrderConfirmationProps) {
           <Soft key={statement}>{statement}</Soft>
         ))}
       </Note>
-      {hasItems ? (
+      {hasItems && props.band ? (
+        <P>
+          Your summers: {props.band.label.toLowerCase()}, from {props.band.basis}. Your install
+          guide, written for your houses and this band, follows in a separate e-mail.
+        </P>
+      ) : hasItems ? (
         <P>
           Your install guide, written for your houses and your summers, follows in a separate
           e-mail.

@@ -1,16 +1,26 @@
-/** `npm run climate:import [folder]`: loads the NOAA July normals into the database and reports what it read. */
+/**
+ * `npm run climate:import [folder]`: loads the climate stations into the database. Without a folder
+ * it loads the committed table (data/climate/normals-1981-2010.csv, as the start command does);
+ * with a folder of raw NOAA files it parses and loads those (checking them against SOURCE.md).
+ */
 import { closeDb, getDb } from "@/db/client";
-import { importClimate } from "@/lib/catalog/climate-store";
-import { env } from "@/lib/config/env";
+import { replaceClimateStations } from "@/lib/climate/commands";
+import { readClimateTable } from "@/lib/climate/table-file";
+import { checkRawFiles, loadRawStations } from "./climate/raw-noaa";
 
-const folder = process.argv[2] ?? env().NOAA_DIR;
+const folder = process.argv[2];
 try {
-  const report = await importClimate(await getDb(), folder);
-  console.log(`Read ${report.normalsRead} normals lines and ${report.inventoryRead} station lines from ${folder}.`);
-  console.log(`Imported ${report.stations} stations with a July normal; skipped ${report.skipped} lines.`);
-  const byReason = new Map<string, number>();
-  for (const r of report.reasons) byReason.set(`${r.file}: ${r.reason}`, (byReason.get(`${r.file}: ${r.reason}`) ?? 0) + 1);
-  for (const [reason, n] of byReason) console.log(`  ${n} × ${reason}`);
+  if (folder) {
+    const bad = checkRawFiles(folder).filter((c) => !c.ok);
+    if (bad.length > 0) throw new Error(`${bad.map((c) => c.file).join(", ")} do not match the checksums in SOURCE.md.`);
+    const load = loadRawStations(folder);
+    const n = await replaceClimateStations(await getDb(), load.stations);
+    console.log(`Read ${load.normals.read} normals lines and ${load.inventory.read} station lines from ${folder}.`);
+    console.log(`Loaded ${n} stations; skipped ${load.normals.skipped.length + load.inventory.skipped.length} lines.`);
+  } else {
+    const n = await replaceClimateStations(await getDb(), readClimateTable());
+    console.log(`Loaded ${n} stations from the committed table data/climate/normals-1981-2010.csv.`);
+  }
 } catch (error) {
   console.error(`Climate import failed: ${(error as Error).message}`);
   process.exitCode = 1;

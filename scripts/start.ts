@@ -1,6 +1,6 @@
 /**
  * One command for the whole store: migrates the database, loads the demo data when it is empty,
- * imports the NOAA climate normals when they are missing, starts the local stand-ins for payments,
+ * loads the committed climate table when the database lacks it, starts the local stand-ins for payments,
  * mail and uploads, and then runs Next.js (dev with --dev, else a production build and `next start`).
  */
 import { spawn, spawnSync } from "node:child_process";

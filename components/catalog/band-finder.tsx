@@ -10,24 +10,22 @@ import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
 import { SHADE_LABELS, type Shade } from "@/lib/catalog/spec";
+import { bandChoiceFromClimate, writeBandChoice } from "@/lib/climate/band-cookie";
+import type { Climate } from "@/lib/climate/resolve";
+import { MONTH_WORDS } from "@/lib/climate/warmest-month";
 import { fetchJson, isApiError } from "@/lib/http/client";
-import type { ClimateAnswer } from "@/lib/catalog/climate-service";
 
 type Mode = "zip" | "temperature";
 
-function rememberBand(answer: ClimateAnswer) {
-  const choice = { id: answer.band.id, julyHighF: answer.julyHighF, ...(answer.zip ? { zip: answer.zip } : {}) };
-  document.cookie = `rw_band=${encodeURIComponent(JSON.stringify(choice))}; path=/; max-age=31536000; samesite=lax`;
-}
 
-/** ZIP code or July high → climate band, with the stations used; remembers the band for the store. */
+/** ZIP code or warmest-month high → climate band, with the stations used; remembers the band for the store. */
 export function BandFinder({ compact = false }: { compact?: boolean }) {
   const router = useRouter();
   const [mode, setMode] = useState<Mode>("zip");
   const [zip, setZip] = useState("");
   const [temp, setTemp] = useState("");
   const [unit, setUnit] = useState<"F" | "C">("F");
-  const [answer, setAnswer] = useState<ClimateAnswer | null>(null);
+  const [answer, setAnswer] = useState<Climate | null>(null);
   const [error, setError] = useState<{ field: Mode; message: string } | null>(null);
   const [busy, setBusy] = useState(false);
 
@@ -35,11 +33,11 @@ export function BandFinder({ compact = false }: { compact?: boolean }) {
     e.preventDefault();
     setBusy(true);
     setError(null);
-    const params = mode === "zip" ? `zip=${encodeURIComponent(zip.trim())}` : `${unit === "F" ? "julyHighF" : "julyHighC"}=${encodeURIComponent(temp.trim())}`;
+    const params = mode === "zip" ? `zip=${encodeURIComponent(zip.trim())}` : `${unit === "F" ? "highF" : "highC"}=${encodeURIComponent(temp.trim())}`;
     try {
-      const body = await fetchJson<ClimateAnswer>(`/api/climate?${params}`);
+      const body = await fetchJson<Climate>(`/api/climate?${params}`);
       setAnswer(body);
-      rememberBand(body);
+      writeBandChoice(bandChoiceFromClimate(body));
       router.refresh();
     } catch (error) {
       if (isApiError(error) && error.status !== 0) {
@@ -63,7 +61,7 @@ export function BandFinder({ compact = false }: { compact?: boolean }) {
             <input type="radio" name="mode" checked={mode === "zip"} onChange={() => setMode("zip")} className="size-5 accent-moss-700" /> ZIP code
           </label>
           <label className="flex items-center gap-2">
-            <input type="radio" name="mode" checked={mode === "temperature"} onChange={() => setMode("temperature")} className="size-5 accent-moss-700" /> My July high
+            <input type="radio" name="mode" checked={mode === "temperature"} onChange={() => setMode("temperature")} className="size-5 accent-moss-700" /> My summer high
           </label>
         </fieldset>
         {mode === "zip" ? (
@@ -72,7 +70,7 @@ export function BandFinder({ compact = false }: { compact?: boolean }) {
           </Field>
         ) : (
           <div className="flex flex-wrap items-end gap-3">
-            <Field label="Average daily high in July" hint="From a weather service or almanac for your town." error={error?.field === "temperature" ? error.message : undefined}>
+            <Field label="Average daily high of your warmest month" hint="July north of the equator, January south of it; from a weather service or almanac for your town." error={error?.field === "temperature" ? error.message : undefined}>
               <Input inputMode="decimal" value={temp} onChange={(e) => setTemp(e.target.value)} className="max-w-32" />
             </Field>
             <div className="flex flex-col gap-1.5">
@@ -98,14 +96,16 @@ export function BandFinder({ compact = false }: { compact?: boolean }) {
   );
 }
 
-function BandAnswer({ answer, compact }: { answer: ClimateAnswer; compact: boolean }) {
+function BandAnswer({ answer, compact }: { answer: Climate; compact: boolean }) {
+  const month = MONTH_WORDS[answer.warmestMonth];
+  const zip = answer.source.kind === "zip" ? answer.source.zip : undefined;
   return (
     <section className="flex flex-col gap-4 rounded-xl border border-moss-200 bg-moss-50 p-5" aria-labelledby="band-result" data-testid="band-result">
       <h2 id="band-result" className="font-display text-2xl font-semibold text-moss-900">
         {answer.band.label}
       </h2>
       <p>
-        Average July high {answer.julyHighF} °F ({answer.julyHighC} °C){answer.zip ? ` near ${answer.zip}` : ""}. {answer.band.explanation}
+        Average daily high in {month}, the warmest month: {answer.display.text}{zip ? ` near ${zip}` : ""}. {answer.band.explanation}
       </p>
       <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-[auto_1fr]">
         <dt className="font-bold">Outside shades that suit</dt>
@@ -114,13 +114,13 @@ function BandAnswer({ answer, compact }: { answer: ClimateAnswer; compact: boole
         <dd>{answer.band.ventsNeeded ? "Needed" : "Optional"}{answer.band.afternoonShade ? "; hang it where it gets afternoon shade" : ""}</dd>
       </dl>
       {answer.nearEdge ? <Alert tone="warn" title="A close call">{answer.nearEdge.note}</Alert> : null}
-      {answer.stations && !compact ? (
+      {answer.stations.length > 0 && !compact ? (
         <Table caption="Weather stations used, nearest first">
           <THead>
             <Tr>
               <Th>Station</Th>
               <Th>Distance</Th>
-              <Th>July high</Th>
+              <Th>{month} high</Th>
               <Th>Data flag</Th>
             </Tr>
           </THead>
@@ -131,7 +131,7 @@ function BandAnswer({ answer, compact }: { answer: ClimateAnswer; compact: boole
                   {s.name}, {s.state}
                 </Td>
                 <Td numeric>{s.distanceMi.toFixed(1)} mi ({(s.distanceMi * 1.609344).toFixed(1)} km)</Td>
-                <Td numeric>{s.julyHighF.toFixed(1)} °F</Td>
+                <Td numeric>{s.highF.toFixed(1)} °F</Td>
                 <Td>{s.flag}</Td>
               </Tr>
             ))}

@@ -11,6 +11,7 @@ import { fetchJson } from "@/lib/http/client";
 import { catalogQueryToParams, type CatalogQuery } from "@/lib/catalog/catalog-query";
 import { BAND_IDS, CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
 import type { HouseCard as HouseCardData } from "@/lib/catalog/house-card";
+import { bandChoiceFromList, readBandChoiceInBrowser, writeBandChoice } from "@/lib/climate/band-cookie";
 import { HouseCard } from "./house-card";
 
 type Result = { items: HouseCardData[]; total: number };
@@ -35,7 +36,7 @@ export function CatalogBrowser({ initialQuery, initialResult }: { initialQuery: 
   useEffect(() => {
     const params = catalogQueryToParams(query).toString();
     window.history.replaceState(null, "", params ? `/houses?${params}` : "/houses");
-    if (query.band) document.cookie = `rw_band=${encodeURIComponent(JSON.stringify({ id: query.band }))}; path=/; max-age=31536000; samesite=lax`;
+    if (query.band) writeBandChoice(bandChoiceFromList(query.band, readBandChoiceInBrowser()));
   }, [query]);
 
   const update = (patch: Partial<CatalogQuery>) => setQuery((q) => ({ ...q, ...patch }));

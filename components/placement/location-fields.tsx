@@ -1,8 +1,10 @@
 "use client";
 
+import { useState } from "react";
 import { useFormContext } from "react-hook-form";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
+import { Select } from "@/components/ui/select";
 import { toOptionalNumber, type PlacementFormValues } from "./form-values";
 
 export type LocateBy = "zip" | "coordinates";
@@ -29,8 +31,12 @@ export function LocationFields({
 }: LocationFieldsProps) {
   const {
     register,
+    getValues,
     formState: { errors },
   } = useFormContext<PlacementFormValues>();
+  // °F or °C, as on the climate page; only the field of the chosen unit is registered.
+  const [unit, setUnit] = useState<"F" | "C">(() => (getValues("julyHighC") !== undefined ? "C" : "F"));
+  const highField = unit === "F" ? "julyHighF" : "julyHighC";
   const optionalNumber = { setValueAs: toOptionalNumber };
 
   return (
@@ -109,20 +115,28 @@ export function LocationFields({
           checked={knowsJulyHigh}
           onChange={(e) => onKnowsJulyHighChange(e.target.checked)}
         />
-        <span>I know my average July high</span>
+        <span>I know the average daily high of my warmest month</span>
       </label>
       {knowsJulyHigh ? (
-        <Field
-          label="Average daily high in July (°F)"
-          hint="Hotter summers need fewer hours of sun on the house. Leave the box unticked to use the nearest weather stations."
-          error={errors.julyHighF?.message ?? serverErrors.julyHighF}
-        >
-          <Input
-            inputMode="decimal"
-            className="max-w-32"
-            {...register("julyHighF", optionalNumber)}
-          />
-        </Field>
+        <div className="flex flex-wrap items-end gap-3">
+          <Field
+            key={highField}
+            label={`Average daily high of your warmest month (°${unit})`}
+            hint="July north of the equator, January south of it. Hotter summers need fewer hours of sun on the house. Leave the box unticked to use the nearest weather stations."
+            error={errors[highField]?.message ?? serverErrors.julyHighF ?? serverErrors.julyHighC}
+          >
+            <Input inputMode="decimal" className="max-w-32" {...register(highField, optionalNumber)} />
+          </Field>
+          <div className="flex flex-col gap-1.5">
+            <label htmlFor="site-high-unit" className="font-bold">
+              Unit
+            </label>
+            <Select id="site-high-unit" value={unit} onChange={(e) => setUnit(e.target.value as "F" | "C")}>
+              <option value="F">°F</option>
+              <option value="C">°C</option>
+            </Select>
+          </div>
+        </div>
       ) : serverErrors.julyHighF ? (
         <p className="text-sm font-bold text-berry-700">{serverErrors.julyHighF}</p>
       ) : null}

@@ -61,7 +61,7 @@ export function PlacementPlanner({ signedIn, siteId }: PlacementPlannerProps) {
     })
       .then((site) => {
         setLocateBy(site.input.lat !== undefined ? "coordinates" : "zip");
-        setKnowsJulyHigh(site.input.julyHighF !== undefined);
+        setKnowsJulyHigh(site.input.julyHighF !== undefined || site.input.julyHighC !== undefined);
         setDescribesSkyline(Array.isArray(site.input.skyline));
         form.reset({ ...PLANNER_DEFAULTS, ...site.input });
         setLoaded({ name: site.name });

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { MONTH_WORDS } from "@/lib/climate/warmest-month";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
@@ -57,8 +58,8 @@ export function PlacementResult({ answer }: { answer: PlacementAnswer }) {
           Summers at this site
         </h2>
         <p>
-          <span className="font-bold">{band.label}</span> ({band.rangeText}). July high used:{" "}
-          {climate.julyHighF} °F ({climate.julyHighC} °C),{" "}
+          <span className="font-bold">{band.label}</span> ({band.rangeText}). Average daily high of the
+          warmest month ({MONTH_WORDS[climate.warmestMonth]} here) used: {climate.display.text},{" "}
           {climate.source === "typed"
             ? "as you typed it."
             : `from the ${climate.stations?.length ?? 3} nearest weather stations, weighted by distance.`}
@@ -78,7 +79,7 @@ export function PlacementResult({ answer }: { answer: PlacementAnswer }) {
                 <Tr>
                   <Th>Station</Th>
                   <Th numeric>Distance</Th>
-                  <Th numeric>July high</Th>
+                  <Th numeric>{MONTH_WORDS[climate.warmestMonth]} high</Th>
                 </Tr>
               </THead>
               <TBody>
@@ -91,7 +92,7 @@ export function PlacementResult({ answer }: { answer: PlacementAnswer }) {
                       {s.distanceMi.toFixed(1)} mi (
                       {(s.distanceMi * KILOMETERS_PER_MILE).toFixed(1)} km)
                     </Td>
-                    <Td numeric>{s.julyHighF.toFixed(1)} °F</Td>
+                    <Td numeric>{s.highF.toFixed(1)} °F</Td>
                   </Tr>
                 ))}
               </TBody>

@@ -8,7 +8,8 @@ import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { useToast } from "@/components/ui/toast";
 import { siteNameSchema, type SavedSiteReceipt } from "@/lib/placement/saved-site-schema";
-import { rememberSiteBand, useSavedSite } from "@/lib/placement/saved-site-store";
+import { writeBandChoice } from "@/lib/climate/band-cookie";
+import { useSavedSite } from "@/lib/placement/saved-site-store";
 import type { PlacementInput } from "@/lib/placement/schema";
 import { requestSaveSite, type ApiError } from "./placement-api";
 
@@ -47,9 +48,12 @@ export function SaveSitePanel({ input, signedIn, defaultName = "My site" }: Save
         bandId: receipt.bandId,
         ...(receipt.guestToken ? { guestToken: receipt.guestToken } : {}),
       });
-      rememberSiteBand({
+      // Points the catalog at the site's band, sorted by fit for this site.
+      writeBandChoice({
         id: receipt.bandId,
-        julyHighF: receipt.julyHighF,
+        source: "site",
+        valueF: receipt.julyHighF,
+        siteName: receipt.name,
         ...(receipt.zip ? { zip: receipt.zip } : {}),
       });
       setSaved(receipt);

@@ -7,7 +7,7 @@ import { Badge } from "@/components/ui/badge";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { ConfirmDialog } from "@/components/ui/dialog";
 import { useToast } from "@/components/ui/toast";
-import { isBandId } from "@/lib/catalog/band-choice";
+import { isBandId } from "@/lib/climate/band-cookie";
 import { clearSavedSite, useSavedSite } from "@/lib/placement/saved-site-store";
 import { requestDeleteSite, type ApiError } from "./placement-api";
 import { STATUS_WORDS } from "./rule-list";

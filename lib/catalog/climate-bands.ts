@@ -1,6 +1,7 @@
 import type { Shade } from "./spec";
 
-// Climate bands keyed to the normal daily high in July.
+// Climate bands keyed to the normal daily high in July: in the warmest month, that is, July north
+// of the equator and January south of it (lib/climate/warmest-month.ts).
 // Source: the bat-house colour guidance keyed to average July high temperature (Tuttle, Kiser &
 // Kiser, The Bat House Builder's Handbook, 2004, as reproduced by agencies); vents 6 in above
 // the bottom where July highs average 85 °F or more (Bat Conservation of Wisconsin,
@@ -130,7 +131,7 @@ export function nearBandEdge(fahrenheit: number): BandEdge | null {
       below,
       above,
       differenceF,
-      note: `Your July high is within 1 °F of ${edgeF} °F, where ${CLIMATE_BANDS[below].label.toLowerCase()} meet ${CLIMATE_BANDS[above].label.toLowerCase()}; recent summers may run warmer, so a house for either band can suit.`,
+      note: `Your summer high (the average daily high of your warmest month) is within 1 °F of ${edgeF} °F, where ${CLIMATE_BANDS[below].label.toLowerCase()} meet ${CLIMATE_BANDS[above].label.toLowerCase()}; recent summers may run warmer, so a house for either band can suit.`,
     };
   }
   return nearest;

@@ -30,7 +30,6 @@ const envSchema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().optional(),
   S3_REGION: z.string().default("us-east-1"),
   UPLOADS_PORT: z.coerce.number().int().default(12113),
-  NOAA_DIR: z.string().default("../shared/data/noaa-normals-1981-2010"),
   LOG_LEVEL: z.enum(["debug", "info", "warn", "error"]).default("info"),
 });
 

@@ -1,4 +1,6 @@
 import { CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
+import { displayClimateValue } from "@/lib/climate/display";
+import { MONTH_WORDS } from "@/lib/climate/warmest-month";
 import { getSunRegime, MORNING_SHARE_MIN } from "@/lib/placement/sun-rule";
 import type { GuideClimate, GuideItem } from "./install-guide-types";
 
@@ -57,16 +59,16 @@ export function climateSection(climate: GuideClimate): {
       heading: "Shade and vents for your summers",
       paragraphs: [
         climate.reason,
-        "Match the outside to your average July high: below 85 °F black or dark; 85 to 95 °F dark or medium, vented; 95 to 100 °F medium or light, vented; 100 °F and above light or white, vented, with afternoon shade.",
+        "Match the outside to the average daily high of your warmest month (July north of the equator, January south of it): below 85 °F black or dark; 85 to 95 °F dark or medium, vented; 95 to 100 °F medium or light, vented; 100 °F and above light or white, vented, with afternoon shade.",
       ],
       advice: [],
     };
   }
   const band = CLIMATE_BANDS[climate.bandId];
-  const high =
-    climate.julyHighF === null
-      ? ""
-      : ` (average July high about ${Math.round(climate.julyHighF)} °F, ${Math.round(((climate.julyHighF - 32) * 5) / 9)} °C)`;
+  // Rounded so it never contradicts the band (84.96 °F reads "about 84 °F", cool summers).
+  const shown = climate.julyHighF === null ? null : displayClimateValue(climate.julyHighF, band);
+  const month = MONTH_WORDS[climate.warmestMonth ?? "july"];
+  const high = shown === null ? "" : ` (average daily high in ${month}, your warmest month, about ${shown.wholeF} °F, ${shown.wholeC} °C)`;
   const advice: GuideItem[] = [
     { topic: "Shade", text: describeShades({ bandId: climate.bandId }) },
     { topic: "Vents", text: describeVents({ bandId: climate.bandId }) },

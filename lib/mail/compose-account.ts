@@ -4,7 +4,7 @@ import type { DbOrTx } from "@/db/client";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { yearEndStatement } from "@/lib/checkout/receipts";
 import { env } from "@/lib/config/env";
-import { CAUTIONS, MOVE_IN_PATIENCE } from "@/lib/safety/cautions";
+import { cautionsFor, MOVE_IN_PATIENCE } from "@/lib/safety/cautions";
 import { LowStockEmail } from "@/emails/low-stock";
 import { PasswordResetEmail } from "@/emails/password-reset";
 import { SeasonalReminderEmail } from "@/emails/seasonal-reminder";
@@ -22,7 +22,7 @@ import {
   yearEndPayloadSchema,
 } from "./payloads";
 import { openText } from "./sealed";
-import { REMINDER_WINDOWS } from "./seasons";
+import { reminderWindowsFor } from "./seasons";
 import { unsubscribeLinks } from "./unsubscribe-links";
 import { RESET_TOKEN_TTL_MS } from "./tokens";
 import { getUpkeepSeason } from "./upkeep-calendar";
@@ -82,7 +82,7 @@ async function yearEnd(db: DbOrTx, payload: unknown): Promise<Composition> {
 }
 
 async function seasonal(db: DbOrTx, payload: unknown): Promise<Composition> {
-  const { userId, reminderId } = parsePayload({
+  const { userId, reminderId, hemisphere } = parsePayload({
     schema: seasonalPayloadSchema,
     payload,
     kind: "seasonal-reminder",
@@ -92,15 +92,15 @@ async function seasonal(db: DbOrTx, payload: unknown): Promise<Composition> {
   // Turned off between queueing and sending: the wish to stop wins.
   if (!preferences)
     throw new PermanentMailError("Not sent: the recipient turned seasonal reminders off.");
-  const window = REMINDER_WINDOWS.find((w) => w.id === reminderId);
+  const window = reminderWindowsFor(hemisphere).find((w) => w.id === reminderId);
   if (!window) throw new PermanentMailError(`No reminder ${reminderId}.`);
   const links = unsubscribeLinks({ token: preferences.unsubscribeToken });
   return {
     element: createElement(SeasonalReminderEmail, {
       org: await loadOrgFooter({ db }),
       name: user.name,
-      season: getUpkeepSeason({ id: window.season }),
-      cautions: CAUTIONS,
+      season: getUpkeepSeason({ id: window.season, hemisphere }),
+      cautions: cautionsFor({ hemisphere }),
       patience: reminderId === "spring-return" ? MOVE_IN_PATIENCE : null,
       preferencesUrl: `${env().APP_URL}/account/preferences`,
       unsubscribeUrl: links.pageUrl,

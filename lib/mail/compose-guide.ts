@@ -6,7 +6,7 @@ import { SHADES } from "@/lib/catalog/spec";
 import { env } from "@/lib/config/env";
 import { InstallGuideEmail } from "@/emails/install-guide";
 import type { Composition } from "./composition";
-import { resolveGuideContext } from "./guide-climate";
+import { resolveGuideContext } from "./guide-context";
 import { buildInstallGuide, type GuideHouse } from "./install-guide-content";
 import { loadOrderForMail } from "./queries/order-for-mail";
 import { installGuidePayloadSchema, parsePayload, PermanentMailError } from "./payloads";

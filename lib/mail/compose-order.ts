@@ -15,6 +15,7 @@ import { PaymentRefundedEmail } from "@/emails/payment-refunded";
 import { ReadyForPickupEmail } from "@/emails/ready-for-pickup";
 import { RefundEmail } from "@/emails/refund";
 import { ShippedEmail } from "@/emails/shipped";
+import { orderBandWords } from "@/lib/climate/order-band";
 import type { Composition } from "./composition";
 import { formatAddress, formatMailDate } from "./format";
 import { findGiftForOrder, loadOrderForMail, type OrderForMail } from "./queries/order-for-mail";
@@ -58,6 +59,7 @@ function confirmation(data: OrderForMail): Composition {
       shipTo: shipToText(order.shipTo),
       amounts: order,
       receipt,
+      band: orderBandWords(order),
     }),
   };
 }

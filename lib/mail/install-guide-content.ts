@@ -2,18 +2,22 @@ import { CLIMATE_BANDS } from "@/lib/catalog/climate-bands";
 import { FIT_LABEL_WORDS, fitForBand, type Fit } from "@/lib/catalog/fit";
 import { SHADE_LABELS } from "@/lib/catalog/spec";
 import { describeSkylineEffect } from "@/lib/placement/skyline-words";
-import { CAUTIONS, MOVE_IN_PATIENCE } from "@/lib/safety/cautions";
+import { cautionsFor, MOVE_IN_PATIENCE } from "@/lib/safety/cautions";
 import { climateSection, describeSunWanted } from "./band-advice";
 import type { GuideHouse, GuideItem, GuideSite, InstallGuide, InstallGuideInput } from "./install-guide-types";
-import { UPKEEP_CALENDAR } from "./upkeep-calendar";
+import { upkeepCalendarFor } from "./upkeep-calendar";
 
 export { describeSunWanted } from "./band-advice";
 
-// What the install guide says, worked out from the buyer's houses, climate band and site; the
+// What the install guide says, worked out from the buyer's houses, climate band and site (the
+// calendar and the cautions in the site's hemisphere); the
 // e-mail template only lays it out. The mounting figures are the placement rules of PRODUCT.md
 // §4 (P1–P10, sources in lib/placement/rules.ts) and the band advice is §2 (sources in
 // lib/catalog/climate-bands.ts); metric alongside per PRODUCT.md "Units" (1 ft = 0.3048 m,
-// 1 mi = 1.609344 km).
+// 1 mi = 1.609344 km). Height: out of predators' reach and more sun (agency guides; common
+// practice). Predator guards fit poles; on a wall, distance from climbable ledges is what helps
+// (common practice, no source). Flat water-based exterior paint, cured before mounting (the
+// handbook's finishing advice, as reproduced by agency guides; curing time: common practice).
 
 export type {
   GuideClimate,
@@ -51,7 +55,7 @@ function mountingPlan(input: InstallGuideInput): GuideItem[] {
   return [
     {
       topic: "Height",
-      text: "The bottom of the house 15 to 20 ft (4.6 to 6.1 m) above the ground; 12 ft (3.7 m) is the least that works.",
+      text: "The bottom of the house 15 to 20 ft (4.6 to 6.1 m) above the ground; 12 ft (3.7 m) is the least that works. Up there it is out of reach of cats, raccoons and other climbing predators, and it gets more hours of sun.",
     },
     { topic: "Facing", text: facingText(input.hemisphere) },
     { topic: "Sun", text: sun },
@@ -77,7 +81,11 @@ function mountingPlan(input: InstallGuideInput): GuideItem[] {
     },
     {
       topic: "Predators",
-      text: "If cats, raccoons or snakes are about, fit a smooth metal guard around the pole below the house.",
+      text: "If cats, raccoons or snakes are about: on a pole, fit a smooth metal guard around the pole below the house; on a building wall, hang it well clear of roofs, ledges, railings and anything else a cat or raccoon can climb or jump from.",
+    },
+    {
+      topic: "Checking from the ground",
+      text: "Check the house from the ground, never by climbing to it: look (with binoculars if you have them) for droppings on the ground or the wall below, dark stains at the entrance, wasp or mud-dauber nests, gaps in the caulk, loose boards or a leaning pole; at dusk, count the bats as they leave. Bats clustered at the entrance or hanging outside on a hot afternoon mean the house is running too hot.",
     },
   ];
 }
@@ -104,13 +112,13 @@ function houseNotes(house: GuideHouse, fit: Fit | null, input: InstallGuideInput
   if (fit?.repaintTo) {
     notes.push({
       topic: "Paint",
-      text: `Before mounting, paint the outside ${SHADE_LABELS[fit.repaintTo].toLowerCase()} with exterior paint; keep paint out of the chambers.`,
+      text: `Before mounting, paint the outside ${SHADE_LABELS[fit.repaintTo].toLowerCase()} with a flat (matte), water-based exterior paint, and let it cure for several days, until it no longer smells, before you mount the house; keep paint out of the chambers.`,
     });
   }
   if (input.climate.known && CLIMATE_BANDS[input.climate.bandId].ventsNeeded && !house.vented) {
     notes.push({
       topic: "No vents",
-      text: "Without vents it can overheat in your summers: give it shade from early afternoon, and check it from the ground on the hottest days.",
+      text: "Without vents it can overheat in your summers: give it shade from early afternoon, and on the hottest days look from the ground for bats clustered at the entrance or hanging outside, a sign it is too hot.",
     });
   }
   return notes;
@@ -153,8 +161,8 @@ export function buildInstallGuide(input: InstallGuideInput): InstallGuide {
     mounting: mountingPlan(input),
     houses: input.houses.map((house) => houseSection(house, input)),
     site: siteSection(input.site),
-    calendar: UPKEEP_CALENDAR,
+    calendar: upkeepCalendarFor(input.hemisphere),
     patience: MOVE_IN_PATIENCE,
-    cautions: CAUTIONS,
+    cautions: cautionsFor({ hemisphere: input.hemisphere }),
   };
 }

@@ -3,6 +3,7 @@ import type { FitLabel } from "@/lib/catalog/fit";
 import type { Shade } from "@/lib/catalog/spec";
 import type { SkylineEffect } from "@/lib/placement/skyline-words";
 import type { Caution } from "@/lib/safety/cautions";
+import type { WarmestMonth } from "@/lib/climate/warmest-month";
 import type { UpkeepSeason } from "./upkeep-calendar";
 import type { Rating } from "@/lib/shared/rating";
 
@@ -25,8 +26,10 @@ export type GuideClimate =
   | {
       known: true;
       bandId: BandId;
-      /** Null when the band came from a saved site without its July high. */
+      /** The warmest month's average daily high, °F, unrounded (older name kept); null when the band came without one. */
       julyHighF: number | null;
+      /** July north of the equator, January south of it. */
+      warmestMonth?: WarmestMonth;
       /** Where the band came from, in words: "your saved site check", "ZIP 85281", … */
       basis: string;
       nearEdgeNote: string | null;

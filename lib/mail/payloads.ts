@@ -38,6 +38,8 @@ export const seasonalPayloadSchema = z.object({
   userId: id,
   reminderId: z.enum(REMINDER_IDS),
   seasonKey: z.string().min(1),
+  /** The hemisphere of the buyer's saved site (older payloads: north). */
+  hemisphere: z.enum(["north", "south"]).default("north"),
 });
 export const lowStockPayloadSchema = z.object({
   modelId: id,

@@ -1,3 +1,4 @@
+import type { Hemisphere } from "@/lib/climate/warmest-month";
 import type { UpkeepSeasonId } from "./upkeep-calendar";
 
 // When the seasonal upkeep reminders go out. A reminder is worth sending only while there is
@@ -5,7 +6,7 @@ import type { UpkeepSeasonId } from "./upkeep-calendar";
 // clock the scheduler keeps; both ends included). The seasons follow PRODUCT.md §7: upkeep in
 // winter while the house is empty, finished before the bats return, and quiet in the maternity
 // season, roughly April to mid-August. The window lengths are common practice, no source.
-// U.S. store: northern-hemisphere seasons only.
+// South of the equator each window falls six months later (PRODUCT.md §7: seasons follow the site).
 
 export const REMINDER_IDS = ["winter-check", "spring-return", "quiet-time"] as const;
 export type ReminderId = (typeof REMINDER_IDS)[number];
@@ -23,20 +24,34 @@ export const REMINDER_WINDOWS: readonly Window[] = [
 export type DueReminder = {
   id: ReminderId;
   season: UpkeepSeasonId;
-  /** One per season and year, e.g. "winter-check-2026" for December 2026 to January 2027. */
+  hemisphere: Hemisphere;
+  /** One per season, year and hemisphere, e.g. "winter-check-2026" for December 2026 to January 2027 (north), "winter-check-south-2026" for June–July 2026. */
   seasonKey: string;
 };
+
+/** The same month-day six months on (south of the equator); days past a month's end clamp to its last day. */
+function shiftSixMonths({ month, day }: MonthDay): MonthDay {
+  const shifted = ((month + 5) % 12) + 1;
+  const last = [31, 29, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][shifted - 1] ?? 31;
+  return { month: shifted, day: Math.min(day, last) };
+}
+
+/** The reminder windows for a hemisphere. */
+export function reminderWindowsFor(hemisphere: Hemisphere): readonly Window[] {
+  if (hemisphere === "north") return REMINDER_WINDOWS;
+  return REMINDER_WINDOWS.map((w) => ({ ...w, from: shiftSixMonths(w.from), to: shiftSixMonths(w.to) }));
+}
 
 function ordinal({ month, day }: MonthDay): number {
   return month * 100 + day;
 }
 
-/** The reminder due on a date, or null between windows. */
-export function findDueReminder({ date }: { date: Date }): DueReminder | null {
+/** The reminder due on a date for a hemisphere, or null between windows. */
+export function findDueReminder({ date, hemisphere = "north" }: { date: Date; hemisphere?: Hemisphere }): DueReminder | null {
   if (Number.isNaN(date.getTime())) throw new RangeError("findDueReminder needs a valid date.");
   const today = { month: date.getUTCMonth() + 1, day: date.getUTCDate() };
   const year = date.getUTCFullYear();
-  for (const window of REMINDER_WINDOWS) {
+  for (const window of reminderWindowsFor(hemisphere)) {
     const wraps = ordinal(window.from) > ordinal(window.to);
     const inside = wraps
       ? ordinal(today) >= ordinal(window.from) || ordinal(today) <= ordinal(window.to)
@@ -44,7 +59,8 @@ export function findDueReminder({ date }: { date: Date }): DueReminder | null {
     if (!inside) continue;
     // A window that crosses the new year is named for the year it starts in.
     const startYear = wraps && ordinal(today) <= ordinal(window.to) ? year - 1 : year;
-    return { id: window.id, season: window.season, seasonKey: `${window.id}-${startYear}` };
+    const key = hemisphere === "north" ? window.id : `${window.id}-south`;
+    return { id: window.id, season: window.season, hemisphere, seasonKey: `${key}-${startYear}` };
   }
   return null;
 }

@@ -2,11 +2,14 @@
 // keeps it: the band used, the sun on the house (by mount, under the skyline) and on its front
 // face, what the skyline takes, the sun's paths for the chart, the ten rules and the label.
 // Pure: location and climate are resolved by the caller.
-import type { BandId } from "@/lib/catalog/climate-bands";
+import type { BandId, ClimateBand } from "@/lib/catalog/climate-bands";
+import type { ClimateDisplay } from "@/lib/climate/display";
+import type { Climate } from "@/lib/climate/resolve";
+import type { NearbyStation } from "@/lib/climate/station-index";
+import type { WarmestMonth } from "@/lib/climate/warmest-month";
 import { describeBearing, normalizeBearing } from "./bearing";
 import type { PlacementInput } from "./schema";
 import { checkPlacement, findSunFaceBearing } from "./rules";
-import type { SiteClimate, SiteLocation } from "./site-climate";
 import type { Skyline } from "./skyline";
 import { describeSkylineEffect, findMainLoss, type SkylineEffect } from "./skyline-words";
 import {
@@ -19,6 +22,43 @@ import {
 import { listSeasonDates } from "./sun-calendar";
 import { traceSunPath, type SunPath } from "./sun-path";
 import type { Mount, PlacementSite, RuleResult, RuleStatus, SunOnHouseSummary } from "./types";
+
+export type SiteLocation = {
+  lat: number;
+  lon: number;
+  /** How the buyer gave it: typed coordinates win over a ZIP when both arrive. */
+  source: "coordinates" | "zip";
+  zip?: string;
+};
+
+/** The site's climate as the answer (and a saved site) keeps it: from lib/climate's one result. */
+export type SiteClimate = {
+  /** The warmest month's average daily high, °F, unrounded (the older name is kept for saved sites). */
+  julyHighF: number;
+  julyHighC: number;
+  warmestMonth: WarmestMonth;
+  /** Rounded for display, never across the band's edge. */
+  display: ClimateDisplay;
+  source: "typed" | "stations";
+  /** The stations used, nearest first (stations only). */
+  stations?: NearbyStation[];
+  /** A sentence when the value lies within 1 °F of a band edge, else null. */
+  nearEdgeNote: string | null;
+  band: ClimateBand;
+};
+
+export function toSiteClimate(climate: Climate): SiteClimate {
+  return {
+    julyHighF: climate.valueF,
+    julyHighC: climate.valueC,
+    warmestMonth: climate.warmestMonth,
+    display: climate.display,
+    source: climate.source.kind === "typed" ? "typed" : "stations",
+    ...(climate.stations.length > 0 ? { stations: climate.stations } : {}),
+    nearEdgeNote: climate.nearEdge?.note ?? null,
+    band: climate.band,
+  };
+}
 
 type Figure = {
   /** Mean hours a day over the season days. */

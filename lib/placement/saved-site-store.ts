@@ -2,7 +2,6 @@
 
 import { useSyncExternalStore } from "react";
 import { z } from "zod";
-import { BAND_COOKIE, type BandChoice } from "@/lib/catalog/band-choice";
 import { BAND_IDS } from "@/lib/catalog/climate-bands";
 import { RATINGS } from "@/lib/shared/rating";
 
@@ -71,12 +70,4 @@ export function useSavedSite(): {
 } {
   const site = useSyncExternalStore(subscribe, readSavedSite, () => null);
   return { site, save: writeSavedSite, clear: clearSavedSite };
-}
-
-/**
- * Points the catalog at the site's band (the same cookie the band finder sets), so the houses
- * are sorted by fit for this site.
- */
-export function rememberSiteBand(choice: BandChoice) {
-  document.cookie = `${BAND_COOKIE}=${encodeURIComponent(JSON.stringify(choice))}; path=/; max-age=31536000; samesite=lax`;
 }

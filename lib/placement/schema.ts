@@ -55,11 +55,18 @@ export const placementInputSchema = z
     ),
     lat: optionalJson(latitude),
     lon: optionalJson(longitude),
-    // Typed-in July high in °F; when absent the July high comes from the ZIP (climate lookup).
+    // The buyer's own average daily high of the warmest month (July north of the equator,
+    // January south of it), in °F or in °C (one of them); when absent it comes from the nearest
+    // stations (lib/climate). The field keeps its older name "julyHighF" for saved sites.
     julyHighF: optionalJson(
-      jsonNumber("July high")
-        .min(30, "Enter the average July high in °F (between 30 and 130).")
-        .max(130, "Enter the average July high in °F (between 30 and 130)."),
+      jsonNumber("Summer high")
+        .min(30, "Enter the average high of your warmest month in °F (between 30 and 130).")
+        .max(130, "Enter the average high of your warmest month in °F (between 30 and 130)."),
+    ),
+    julyHighC: optionalJson(
+      jsonNumber("Summer high")
+        .min(-1, "Enter the average high of your warmest month in °C (between -1 and 54).")
+        .max(54, "Enter the average high of your warmest month in °C (between -1 and 54)."),
     ),
     mount: mountSchema,
     heightFt: jsonNumber("Height")
@@ -85,6 +92,9 @@ export const placementInputSchema = z
         path: [hasLat ? "lon" : "lat"],
         message: "Give both latitude and longitude, or neither.",
       });
+    }
+    if (input.julyHighF !== undefined && input.julyHighC !== undefined) {
+      ctx.addIssue({ code: "custom", path: ["julyHighC"], message: "Give the summer high in °F or in °C, not both." });
     }
     if (input.zip === undefined && !hasLat && !hasLon) {
       ctx.addIssue({

@@ -1,18 +1,10 @@
-import { CAUTIONS, type Caution } from "@/lib/safety/cautions";
 import type { Hemisphere } from "./season-rules";
 
 // The one wording of the cautions (lib/safety/cautions.ts), with the maternity months of the
 // house's own hemisphere (PRODUCT.md §7: south of the equator roughly October to mid-February,
 // upkeep in June–August).
 
-const SOUTHERN_MATERNITY =
-  "Do not open, move or knock on a house with bats in it during the maternity season, roughly October to mid-February south of the equator " +
-  "(local rules differ, and some places protect roosting bats by law). Do upkeep in winter, June to August, when the house is empty.";
-
-export function cautionsFor({ hemisphere }: { hemisphere: Hemisphere }): readonly Caution[] {
-  if (hemisphere === "north") return CAUTIONS;
-  return CAUTIONS.map((c) => (c.id === "maternity-season" ? { ...c, text: SOUTHERN_MATERNITY } : c));
-}
+export { cautionsFor } from "@/lib/safety/cautions";
 
 /** What to do with a house still empty after two summers (PRODUCT.md §7), and when. */
 export function emptyHouseAdvice({ hemisphere }: { hemisphere: Hemisphere }): string[] {

@@ -70,3 +70,15 @@ export function getCaution({ id }: { id: CautionId }): Caution {
   if (!caution) throw new RangeError(`No caution has the id ${id}.`);
   return caution;
 }
+
+// South of the equator the maternity season is roughly October to mid-February and upkeep falls in
+// June–August (PRODUCT.md §7: every caution uses the site's hemisphere).
+const SOUTHERN_MATERNITY =
+  "Do not open, move or knock on a house with bats in it during the maternity season, roughly October to mid-February south of the equator " +
+  "(local rules differ, and some places protect roosting bats by law). Do upkeep in winter, June to August, when the house is empty.";
+
+/** The cautions with the maternity months of the site's hemisphere. */
+export function cautionsFor({ hemisphere }: { hemisphere: "north" | "south" }): readonly Caution[] {
+  if (hemisphere === "north") return CAUTIONS;
+  return CAUTIONS.map((c) => (c.id === "maternity-season" ? { ...c, text: SOUTHERN_MATERNITY } : c));
+}

@@ -42,12 +42,17 @@ test("a typed July high in °C works, and an unknown ZIP gets a clear message", 
   await page.getByRole("textbox", { name: /ZIP code/ }).fill("00000");
   await page.getByRole("button", { name: "Find my band" }).click();
   await expect(page.getByText(/no map centre for ZIP 00000/)).toBeVisible();
-  await page.getByLabel("My July high").check();
-  await page.getByLabel("Average daily high in July").fill("30");
+  await page.getByLabel("My summer high").check();
+  await page.getByLabel("Average daily high of your warmest month").fill("30");
   await page.getByLabel("Unit").selectOption("C");
   await page.getByRole("button", { name: "Find my band" }).click();
   // 30 °C = 86 °F: warm summers.
   await expect(page.getByTestId("band-result").getByRole("heading", { name: "Warm summers" })).toBeVisible();
+  await expect(page.getByTestId("band-result")).toContainText("86.0 °F (30.0 °C)");
+  // The cookie keeps what the buyer typed, in their unit.
+  const cookie = (await page.context().cookies()).find((c) => c.name === "rw_band")?.value ?? "";
+  expect(JSON.parse(decodeURIComponent(cookie))).toMatchObject({ id: "warm", source: "typed", typed: { value: 30, unit: "C" } });
+
 });
 
 test("the home page offers the band finder and the catalog", async ({ page }) => {

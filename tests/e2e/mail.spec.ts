@@ -31,6 +31,11 @@ test("a paid order's confirmation and install guide arrive in the inbox, once ea
   page,
 }) => {
   const email = `mail-e2e-${Date.now()}@example.org`;
+  // The buyer finds their band first: it travels with the order into both messages.
+  await page.goto("/climate");
+  await page.getByRole("textbox", { name: /ZIP code/ }).fill("85281");
+  await page.getByRole("button", { name: "Find my band" }).click();
+  await expect(page.getByTestId("band-result").getByRole("heading", { name: "Very hot summers" })).toBeVisible();
   await page.goto("/houses/saltbush-white");
   await page.getByRole("button", { name: "Add to cart" }).click();
   await expect(page.getByText(/in your cart: view cart/)).toBeVisible();
@@ -57,6 +62,8 @@ test("a paid order's confirmation and install guide arrive in the inbox, once ea
   expect(confirmation.text).toContain("/orders/");
   // Tempe's summers are very hot (from the imported NOAA normals near ZIP 85281).
   expect(guide.text).toMatch(/light or white outside/);
+  expect(confirmation.text).toMatch(/Your summers: very hot summers, from the climate normals near ZIP 85281/);
+  expect(guide.text).toMatch(/near ZIP 85281, as you looked it up in our store: very hot summers/);
   expect(guide.text).toMatch(/Afternoon shade/);
   expect(guide.text).toMatch(/Call 811 before you dig a pole hole/);
 

@@ -24,8 +24,6 @@ const graph = buildImportGraph(root, [...CODE, "stand-ins"]);
  */
 const SQL_EXCEPTIONS = new Map<string, string>([
   ["lib/jobs/runner.ts", "the queue adapter: pg-boss runs over the app's own database client and closes before it"],
-  ["lib/catalog/climate-service.ts", "the climate lookup is being replaced by lib/climate/ (issue 12); it moves with that work"],
-  ["lib/catalog/climate-store.ts", "the climate import is being replaced by lib/climate/ (issue 12); it moves with that work"],
 ]);
 
 /** The one module allowed to write orders.status (the order lifecycle, lib/orders/). */

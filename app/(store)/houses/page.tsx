@@ -3,7 +3,7 @@ import Link from "next/link";
 import { CatalogBrowser } from "@/components/catalog/catalog-browser";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { Alert } from "@/components/ui/alert";
-import { getBandChoice } from "@/lib/catalog/band-cookie-server";
+import { getBandChoice } from "@/lib/climate/band-cookie-server";
 import { catalogQuerySchema, type CatalogQuery } from "@/lib/catalog/catalog-query";
 import { toHouseCard } from "@/lib/catalog/house-card";
 import { listHouses } from "@/lib/catalog/queries";

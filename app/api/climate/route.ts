@@ -1,7 +1,10 @@
-import { climateQuerySchema, resolveClimate } from "@/lib/catalog/climate-service";
+import { requireClimate } from "@/lib/climate/queries";
+import { climateQuerySchema, toClimateInput } from "@/lib/climate/query-schema";
 import { parseQuery, route } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";
 
-// Public: ZIP code or July high (°F or °C) → climate band, with the stations used for a ZIP.
-export const GET = route({ public: true }, async ({ request }) => resolveClimate(parseQuery(request, climateQuerySchema)));
+// Public: ZIP code, latitude/longitude or a typed warmest-month high (°F or °C) → the climate result.
+export const GET = route({ public: true }, async ({ request }) =>
+  requireClimate(toClimateInput(parseQuery(request, climateQuerySchema)), { zip: "zip", value: "value" }),
+);

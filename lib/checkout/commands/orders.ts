@@ -4,6 +4,7 @@ import { and, eq, lt, sql } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db/client";
 import { orderLines, orders, sites, type OrderRow } from "@/db/schema";
 import type { SessionUser } from "@/lib/auth/session";
+import { NO_ORDER_BAND, type OrderBand } from "@/lib/climate/order-band";
 import { AppError } from "@/lib/http/errors";
 import { changeOrderStatus, openOrder, SYSTEM_ACTOR, type NewOrderValues } from "@/lib/orders/commands";
 import { StaleOrderError } from "@/lib/orders/refusals";
@@ -44,7 +45,13 @@ async function resolveSiteId(tx: DbOrTx, input: CheckoutRequest, user: SessionUs
  * per line, so concurrent checkouts can never take stock below zero — then creates the
  * PaymentIntent for the amount computed from the database, with one idempotency key per order.
  */
-export async function startCheckout(input: CheckoutRequest, user: SessionUser | null, now = new Date()): Promise<CheckoutStarted> {
+export async function startCheckout(
+  input: CheckoutRequest,
+  user: SessionUser | null,
+  now = new Date(),
+  /** The band the buyer saw, from the band cookie (lib/climate/order-band.ts). */
+  band: OrderBand = NO_ORDER_BAND,
+): Promise<CheckoutStarted> {
   const db = await getDb();
   const order = await db.transaction(async (tx) => {
     const { quote, models } = await quoteFromDatabase(tx, {
@@ -69,6 +76,7 @@ export async function startCheckout(input: CheckoutRequest, user: SessionUser | 
       reservedUntil: new Date(now.getTime() + RESERVATION_MS),
       stockHeld: input.items.length > 0,
       siteId,
+      ...band,
     };
     const row = await openOrder(tx, { values, actor: { id: user?.id ?? null, role: user?.role ?? "customer" }, note: "Checkout started" });
     if (quote.lines.length > 0) {

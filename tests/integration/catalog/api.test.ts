@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it, vi } from "vitest";
 import { getDb } from "@/db/client";
 import { seedDemo } from "@/lib/demo/commands";
-import { importClimate } from "@/lib/catalog/climate-store";
+import { loadClimateTableIfNeeded } from "@/lib/climate/commands";
 import { resetDb } from "../../support/db";
 
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: async () => null }));
@@ -19,7 +19,8 @@ const call = (handler: Handler, url: string, params: Record<string, string> = {}
 beforeAll(async () => {
   const db = await resetDb();
   await seedDemo(db);
-  await importClimate(await getDb(), "../shared/data/noaa-normals-1981-2010");
+  await loadClimateTableIfNeeded(await getDb());
+  (globalThis as { __roostwrightStations?: unknown }).__roostwrightStations = undefined;
 }, 120_000);
 
 describe("GET /api/houses", () => {

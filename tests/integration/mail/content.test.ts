@@ -69,7 +69,7 @@ describe("the install guide", () => {
     });
     const { text } = await sentGuide(orderId);
     expect(text).toMatch(
-      /near ZIP 85281, where we ship your order: very hot summers \(average July high about 106 °F, 41 °C\)/,
+      /near ZIP 85281, where we ship your order: very hot summers \(average daily high in July, your warmest month, about 106 °F, 41 °C\)/,
     );
     expect(text).toMatch(/light or white outside/);
     expect(text).toMatch(/Vents are needed/);

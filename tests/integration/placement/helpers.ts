@@ -1,7 +1,6 @@
 import { climateStations } from "@/db/schema";
 import type { Db } from "@/db/client";
-import { importClimate } from "@/lib/catalog/climate-store";
-import { env } from "@/lib/config/env";
+import { loadClimateTableIfNeeded } from "@/lib/climate/commands";
 import type { z } from "zod";
 import type { placementInputSchema } from "@/lib/placement/schema";
 
@@ -32,16 +31,15 @@ export function jsonRequest(url: string, body: unknown, init: RequestInit = {}):
   });
 }
 
-// The station index is cached per process on globalThis (lib/catalog/climate-service.ts);
+// The station index is cached per process on globalThis (lib/climate/queries.ts);
 // forgetting it makes the next request read the table as it is now.
 export function forgetStationIndex() {
   (globalThis as { __roostwrightStations?: unknown }).__roostwrightStations = undefined;
 }
 
-/** Loads the real NOAA normals (about 7,500 stations) unless the table already holds them. */
+/** Loads the committed NOAA table (about 7,500 stations) unless the database already holds it. */
 export async function loadStations(db: Db) {
-  const existing = await db.select({ id: climateStations.id }).from(climateStations).limit(1);
-  if (existing.length === 0) await importClimate(db, env().NOAA_DIR);
+  await loadClimateTableIfNeeded(db);
   forgetStationIndex();
 }
 

@@ -7,7 +7,7 @@ import { orders, sites, users, type OrderRow } from "@/db/schema";
 import { GET as sitesList, POST as sitesPost } from "@/app/api/sites/route";
 import { DELETE as siteDelete, GET as siteGet } from "@/app/api/sites/[id]/route";
 import type { SessionUser } from "@/lib/auth/session";
-import { resolveGuideContext } from "@/lib/mail/guide-climate";
+import { resolveGuideContext } from "@/lib/mail/guide-context";
 import { buildInstallGuide } from "@/lib/mail/install-guide-content";
 import type { OrgFooter } from "@/lib/mail/message-types";
 import { resetDb } from "../../support/db";

@@ -1,5 +1,3 @@
-import { fileURLToPath } from "node:url";
-import { resolve } from "node:path";
 import type { HouseSpec } from "@/lib/catalog/spec";
 
 // A four-chamber nursery house that meets every criterion, the starting point that each test
@@ -25,6 +23,3 @@ export const SOUND_SPEC: HouseSpec = {
 
 export const withSpec = (changes: Partial<HouseSpec>): HouseSpec => ({ ...SOUND_SPEC, ...changes });
 
-const REPO_ROOT = fileURLToPath(new URL("../../../", import.meta.url));
-/** The official NOAA files, beside the repository (never an absolute path). */
-export const NOAA_FOLDER = resolve(REPO_ROOT, "../shared/data/noaa-normals-1981-2010");

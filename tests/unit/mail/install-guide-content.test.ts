@@ -193,3 +193,54 @@ describe("every guide", () => {
     ]);
   });
 });
+
+describe("the guide for a site south of the equator, and the content fixes", () => {
+  // PRODUCT.md §2 and §7: Pago Pago (14.33° S) keys to its January normal, 87.6 °F at the airport:
+  // warm summers, vents needed; its calendar and maternity caution are the southern ones.
+  const pagoPago = buildInstallGuide({
+    houses: [{ ...hollowFour, vented: false }],
+    climate: { known: true, bandId: "warm", julyHighF: 87.6, warmestMonth: "january", basis: "your saved site check", nearEdgeNote: null },
+    site: null,
+    hemisphere: "south",
+  });
+  const text = allText(pagoPago);
+
+  it("names January as the warmest month, warm summers and vents", () => {
+    expect(pagoPago.climate.paragraphs[0]).toMatch(/warm summers \(average daily high in January, your warmest month, about 88 °F, 31 °C\)/);
+    expect(text).toMatch(/Vents are needed/);
+  });
+
+  it("uses the southern calendar and maternity caution", () => {
+    expect(pagoPago.calendar.map((s) => s.months)).toEqual(["June to August", "September", "October to mid-February", "Mid-February to May"]);
+    expect(pagoPago.cautions.find((c) => c.id === "maternity-season")?.text).toMatch(/October to mid-February/);
+    expect(text).not.toMatch(/April to mid-August/);
+  });
+
+  it("never shows a rounded value over the band's edge: 84.96 °F reads about 84 °F, cool summers", () => {
+    const guide = guideFor("cool", 84.96);
+    expect(guide.climate.paragraphs[0]).toMatch(/cool summers \(average daily high in July, your warmest month, about 84 °F/);
+  });
+
+  it("says a predator guard is for poles, and how to keep a wall house out of reach", () => {
+    const predators = guideFor("warm", 88).mounting.find((m) => m.topic === "Predators")?.text ?? "";
+    expect(predators).toMatch(/on a pole, fit a smooth metal guard/);
+    expect(predators).toMatch(/on a building wall, hang it well clear of roofs, ledges, railings/);
+  });
+
+  it("gives height its accepted reasons, and says what to look for from the ground", () => {
+    const mounting = guideFor("warm", 88).mounting;
+    const height = mounting.find((m) => m.topic === "Height")?.text ?? "";
+    expect(height).toMatch(/out of reach of cats, raccoons and other climbing predators/);
+    expect(height).toMatch(/more hours of sun/);
+    expect(height).not.toMatch(/warmer/);
+    expect(mounting.find((m) => m.topic === "Checking from the ground")?.text).toMatch(/droppings on the ground.*dark stains at the entrance/);
+  });
+
+  it("asks for flat water-based exterior paint, cured before mounting", () => {
+    const black = { ...hollowFour, exteriorShade: "black" as const };
+    const notes = guideFor("warm", 88, [black]).houses[0]?.notes ?? [];
+    const paint = notes.find((n) => n.topic === "Paint")?.text ?? "";
+    expect(paint).toMatch(/flat \(matte\), water-based exterior paint/);
+    expect(paint).toMatch(/cure .* before you mount/);
+  });
+});

@@ -4,24 +4,26 @@
 // June solstice, δ = 23.44°).
 import { describe, expect, it } from "vitest";
 import { bandForJulyHigh } from "@/lib/catalog/climate-bands";
-import { buildPlacementAnswer } from "@/lib/placement/placement-answer";
+import { resolveClimate } from "@/lib/climate/resolve";
+import { buildPlacementAnswer, toSiteClimate } from "@/lib/placement/placement-answer";
 import type { PlacementInput } from "@/lib/placement/schema";
 import { seasonSunOnHouse } from "@/lib/placement/sun";
 
 const location = { lat: 40, lon: -100, source: "coordinates" as const };
-const climate = (julyHighF: number) => ({
-  julyHighF,
-  julyHighC: 0,
-  source: "typed" as const,
-  nearEdgeNote: null,
-  band: bandForJulyHigh(julyHighF),
-});
+// Through the one climate function, as the site service does (a typed °F value at the site).
+const climate = (julyHighF: number) => {
+  const outcome = resolveClimate({ input: { ...location, typed: { value: julyHighF, unit: "F" } }, index: null });
+  if (!outcome.ok) throw new Error(outcome.message);
+  expect(outcome.climate.band).toBe(bandForJulyHigh(julyHighF));
+  return toSiteClimate(outcome.climate);
+};
 const input = (partial: Partial<PlacementInput> = {}): PlacementInput => ({
   skyline: undefined,
   zip: undefined,
   lat: 40,
   lon: -100,
   julyHighF: 88,
+  julyHighC: undefined,
   mount: "pole",
   heightFt: 16,
   facingDeg: 180,

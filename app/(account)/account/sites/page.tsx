@@ -4,7 +4,7 @@ import { SavedSiteList } from "@/components/placement/saved-site-list";
 import { ButtonLink } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/empty-state";
 import { requirePageUser } from "@/lib/auth/guard";
-import { isBandId } from "@/lib/catalog/band-choice";
+import { isBandId } from "@/lib/climate/band-cookie";
 import { CLIMATE_BANDS } from "@/lib/catalog/climate-bands";
 import { describeSkylineEffect, skylineEffectSchema } from "@/lib/placement/skyline-words";
 import { listSitesByUser } from "@/lib/placement/queries";

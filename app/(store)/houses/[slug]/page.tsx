@@ -7,7 +7,7 @@ import { SpecTable } from "@/components/catalog/spec-table";
 import { PageShell } from "@/components/page-header";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
-import { getBandChoice } from "@/lib/catalog/band-cookie-server";
+import { getBandChoice } from "@/lib/climate/band-cookie-server";
 import { CERTIFICATION_NAME, CERTIFICATION_SUMMARY } from "@/lib/catalog/certification";
 import { CLIMATE_BANDS } from "@/lib/catalog/climate-bands";
 import { drawingUrl, photoSrcSet, photoUrl } from "@/lib/catalog/photo-url";

@@ -5,7 +5,8 @@ import {
   haversineOfAngle,
   type LatLon,
 } from "./geo-distance";
-import type { JulyStation } from "./noaa";
+import type { ClimateStation, NormalFlag } from "./noaa";
+import { warmestMonthAt, type WarmestMonth } from "./warmest-month";
 
 // Nearest-station lookup over a latitude/longitude grid. The grid is searched ring by ring
 // outward from the query's cell and stops once no unvisited cell can hold a station nearer than
@@ -19,7 +20,7 @@ const SAME_PLACE_MI = 0.01;
 // Beyond this many rings (15° at 0.5° cells) a plain scan is cheaper than more rings.
 const MAX_RINGS = 30;
 
-type IndexedStation = { station: JulyStation; lat: number; lon: number; cosLat: number };
+type IndexedStation = { station: ClimateStation; lat: number; lon: number; cosLat: number };
 
 export type StationIndex = {
   readonly cellDeg: number;
@@ -34,11 +35,25 @@ export type NearbyStation = {
   id: string;
   name: string;
   state: string;
+  lat: number;
+  lon: number;
+  /** Great-circle miles from the point, unrounded. */
   distanceMi: number;
-  julyHighF: number;
-  flag: JulyStation["flag"];
+  /** The station's normal daily high for the warmest month at the point, °F (as NOAA gives it, 0.1 °F). */
+  highF: number;
+  flag: NormalFlag;
 };
-export type JulyHighEstimate = { julyHighF: number; stations: NearbyStation[] };
+export type WarmestMonthEstimate = {
+  /** The 1/d²-weighted normal, unrounded: the band is chosen from this value. */
+  valueF: number;
+  month: WarmestMonth;
+  stations: NearbyStation[];
+};
+
+/** A station's own warmest month (its hemisphere's), and its normal high then; null if NOAA has none. */
+const stationMonth = (station: ClimateStation): WarmestMonth => warmestMonthAt(station.lat);
+const monthValue = (station: ClimateStation) =>
+  stationMonth(station) === "january" ? station.janHighF : station.julyHighF;
 
 const cellRow = (lat: number, cellDeg: number, rows: number) =>
   Math.min(rows - 1, Math.floor((lat + 90) / cellDeg));
@@ -47,7 +62,7 @@ const cellColumn = (lon: number, cellDeg: number, columns: number) =>
 
 /** Build once per process (about 7,500 stations take a few milliseconds). */
 export function createStationIndex(
-  stations: readonly JulyStation[],
+  stations: readonly ClimateStation[],
   cellDeg = CELL_DEG,
 ): StationIndex {
   const rows = Math.ceil(180 / cellDeg);
@@ -110,7 +125,8 @@ function searchRings(index: StationIndex, lat: number, lon: number, q: LatLon): 
     const cell = cells.get(row * columns + (((col % columns) + columns) % columns));
     if (!cell) return;
     for (const item of cell)
-      offer(best, item, haversineOfAngle(lat, lon, cosLat, item.lat, item.lon, item.cosLat));
+      if (monthValue(item.station) !== null)
+        offer(best, item, haversineOfAngle(lat, lon, cosLat, item.lat, item.lon, item.cosLat));
   };
   // Distances from the query to its own cell's edges, in degrees.
   const southGap = q.lat + 90 - row0 * cellDeg;
@@ -139,18 +155,20 @@ function searchRings(index: StationIndex, lat: number, lon: number, q: LatLon): 
   // Far from every station (open ocean, remote islands): scan them all.
   const scanned: Candidate[] = [];
   for (const item of index.all)
-    offer(scanned, item, haversineOfAngle(lat, lon, cosLat, item.lat, item.lon, item.cosLat));
+    if (monthValue(item.station) !== null)
+      offer(scanned, item, haversineOfAngle(lat, lon, cosLat, item.lat, item.lon, item.cosLat));
   return scanned;
 }
 
-const oneDecimal = (n: number) => Math.round(n * 10) / 10;
-
 /**
- * The July normal daily high at a point: the three nearest stations by great-circle distance,
- * weighted by 1/distance² (inverse-distance weighting with power 2; D. Shepard, "A
- * two-dimensional interpolation function for irregularly-spaced data", ACM 1968).
+ * The normal daily high of the warmest month at a point (July north of the equator, January
+ * south of it; lib/climate/warmest-month.ts): each station contributes its own warmest month (its
+ * hemisphere's), and `month` names the point's. The three nearest stations with that value, by
+ * great-circle distance, weighted by 1/distance² (inverse-distance weighting with power 2; D.
+ * Shepard, "A two-dimensional interpolation function for irregularly-spaced data", ACM 1968).
+ * Nothing is rounded here: the band is chosen from this value, and only the display rounds.
  */
-export function lookupJulyHigh(index: StationIndex, point: LatLon): JulyHighEstimate {
+export function lookupWarmestMonthHigh(index: StationIndex, point: LatLon): WarmestMonthEstimate {
   if (
     !Number.isFinite(point.lat) ||
     !Number.isFinite(point.lon) ||
@@ -160,35 +178,40 @@ export function lookupJulyHigh(index: StationIndex, point: LatLon): JulyHighEsti
     throw new RangeError(`Not a latitude/longitude: ${point.lat}, ${point.lon}.`);
   }
   if (index.all.length === 0) throw new RangeError("The station index is empty.");
+  const month = warmestMonthAt(point.lat);
   const best = searchRings(index, point.lat * DEG, point.lon * DEG, point);
   const near = best.map(({ item, h }) => ({
     station: item.station,
+    highF: monthValue(item.station) ?? item.station.julyHighF,
     distanceMi: EARTH_RADIUS_MI * angleFromHaversine(h),
   }));
 
   const first = near[0];
-  let julyHighF: number;
+  let valueF: number;
   if (first && first.distanceMi < SAME_PLACE_MI) {
-    julyHighF = first.station.julyHighF;
+    valueF = first.highF;
   } else {
     let weighted = 0;
     let weights = 0;
-    for (const { station, distanceMi } of near) {
+    for (const { highF, distanceMi } of near) {
       const w = 1 / (distanceMi * distanceMi);
-      weighted += w * station.julyHighF;
+      weighted += w * highF;
       weights += w;
     }
-    julyHighF = weighted / weights;
+    valueF = weighted / weights;
   }
   return {
-    julyHighF: oneDecimal(julyHighF),
-    stations: near.map(({ station, distanceMi }) => ({
+    valueF,
+    month,
+    stations: near.map(({ station, highF, distanceMi }) => ({
       id: station.id,
       name: station.name,
       state: station.state,
-      distanceMi: oneDecimal(distanceMi),
-      julyHighF: station.julyHighF,
-      flag: station.flag,
+      lat: station.lat,
+      lon: station.lon,
+      distanceMi,
+      highF,
+      flag: (stationMonth(station) === "january" ? station.janFlag : station.julyFlag) ?? station.julyFlag,
     })),
   };
 }

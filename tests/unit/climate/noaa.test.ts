@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { joinJulyNormals, parseStationInventory, parseTmaxNormals } from "@/lib/catalog/noaa";
+import { joinStationNormals, parseStationInventory, parseTmaxNormals } from "@/lib/climate/noaa";
 import { monthsWithJuly, stationLine, tmaxLine } from "./noaa-lines";
 
 // Format: NOAA NCEI U.S. Climate Normals 1981–2010 readme (fixed-width columns, tenths of °F,
@@ -140,8 +140,8 @@ describe("parseStationInventory", () => {
   });
 });
 
-describe("joinJulyNormals", () => {
-  it("joins on id, converts tenths to °F and drops stations missing from either file", () => {
+describe("joinStationNormals", () => {
+  it("joins on id, converts tenths to °F (January and July) and drops stations missing from either file", () => {
     const normals = parseTmaxNormals(
       [
         tmaxLine("USW00023183", monthsWithJuly(1061), "S"),
@@ -160,15 +160,17 @@ describe("joinJulyNormals", () => {
         stationLine({ id: "USC00000010", lat: 40, lon: -100, state: "NE", name: "NO NORMALS" }),
       ].join("\n"),
     ).rows;
-    expect(joinJulyNormals(normals, stations)).toEqual([
+    expect(joinStationNormals(normals, stations)).toEqual([
       {
         id: "USW00023183",
         name: "PHOENIX SKY HARBOR INTL AP",
         state: "AZ",
         lat: 33.4278,
         lon: -112.0039,
+        janHighF: 40,
+        janFlag: "S",
         julyHighF: 106.1,
-        flag: "S",
+        julyFlag: "S",
       },
     ]);
   });

@@ -1,7 +1,8 @@
 // Parsers for two fixed-width files of the NOAA NCEI U.S. Climate Normals 1981–2010 (public
 // domain): products/temperature/mly-tmax-normal.txt and station-inventories/allstations.txt.
-// Column layout from the normals' readme, as restated in
-// ../shared/data/noaa-normals-1981-2010/SOURCE.md. Every bad line is skipped with its reason, never guessed at.
+// Column layout from the normals' readme, as restated in the raw files' SOURCE.md (the rebuild
+// script scripts/climate-build-table.ts reads them; the store itself reads only the committed table
+// data/climate/). Every bad line is skipped with its reason, never guessed at.
 
 export type SkippedLine = { line: number; reason: string };
 export type ParseResult<Row> = { rows: Row[]; read: number; skipped: SkippedLine[] };
@@ -32,14 +33,18 @@ export type StationRow = {
   wmoId: string | null;
 };
 
-export type JulyStation = {
+/** One station as the store uses it: where it is, and its January and July normal daily highs. */
+export type ClimateStation = {
   id: string;
   name: string;
   state: string;
   lat: number;
   lon: number;
+  /** °F; null where the file has a "no value" code for January (none in this copy). */
+  janHighF: number | null;
+  janFlag: NormalFlag | null;
   julyHighF: number;
-  flag: NormalFlag;
+  julyFlag: NormalFlag;
 };
 
 // GHCN-Daily ids: 2-letter country code, 1-character network code, 8-character station number.
@@ -195,23 +200,26 @@ export function parseStationInventory(text: string): ParseResult<StationRow> {
 }
 
 /** Stations that have both a July normal and an inventory entry; tenths of °F become °F. */
-export function joinJulyNormals(
+export function joinStationNormals(
   normals: readonly TmaxNormalRow[],
   stations: readonly StationRow[],
-): JulyStation[] {
+): ClimateStation[] {
   const byId = new Map(stations.map((s) => [s.id, s]));
-  const joined: JulyStation[] = [];
+  const joined: ClimateStation[] = [];
   for (const normal of normals) {
     const station = byId.get(normal.id);
     if (!station) continue;
+    const jan = normal.months[0];
     joined.push({
       id: normal.id,
       name: station.name,
       state: station.state,
       lat: station.lat,
       lon: station.lon,
+      janHighF: jan?.tenthsF == null ? null : jan.tenthsF / 10,
+      janFlag: jan?.flag ?? null,
       julyHighF: normal.julyTenthsF / 10,
-      flag: normal.julyFlag,
+      julyFlag: normal.julyFlag,
     });
   }
   return joined;
