@@ -4,7 +4,8 @@ import { defineConfig, devices } from "@playwright/test";
 // its own stand-in ports, in Debian's chromium (never a downloaded browser). E2E_PORT moves the
 // app and its stand-ins together, so two checkouts can run their suites side by side.
 const PORT = Number(process.env.E2E_PORT ?? 3100);
-const STAND_IN_BASE = PORT + 9111; // 3100 → 12211, 12212, 12213
+// 3100 → 12211–12213, 3200 → 13211–13213, …: clear of the integration suite's 12311/12312.
+const STAND_IN_BASE = 12211 + (PORT - 3100) * 10;
 export const E2E_ENV = {
   APP_URL: `http://localhost:${PORT}`,
   DATA_DIR: "var/e2e/data",

@@ -4,7 +4,7 @@ import { seedDemo } from "@/lib/demo/commands";
 import { bandChoiceFromClimate, parseBandChoice, serializeBandChoice, type BandChoice } from "@/lib/climate/band-cookie";
 import { loadClimateTableIfNeeded } from "@/lib/climate/commands";
 import type { Climate } from "@/lib/climate/resolve";
-import { deliverPendingMail } from "@/lib/mail/sender";
+import { deliverPendingMail } from "@/lib/mail/commands/sender";
 import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";
 import { startTestPayments } from "../../support/payments";
