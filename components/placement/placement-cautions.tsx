@@ -1,11 +1,12 @@
 import { ToneIcon } from "@/components/ui/tone-icon";
-import { CAUTIONS, MOVE_IN_PATIENCE } from "@/lib/safety/cautions";
+import { cautionsFor, MOVE_IN_PATIENCE } from "@/lib/safety/cautions";
 
 /**
  * PRODUCT.md §7, shown wherever the planner talks about raising, mounting or moving a house.
- * The wording is the store's one copy in lib/safety/cautions.ts, shared with the e-mails.
+ * The wording is the store's one copy in lib/safety/cautions.ts, shared with the e-mails; the
+ * maternity months follow the checked site's hemisphere.
  */
-export function PlacementCautions() {
+export function PlacementCautions({ hemisphere = "north" }: { hemisphere?: "north" | "south" }) {
   return (
     <section
       aria-labelledby="placement-cautions"
@@ -19,7 +20,7 @@ export function PlacementCautions() {
         Before you climb, dig or mount
       </h2>
       <ul className="flex flex-col gap-3">
-        {CAUTIONS.map((c) => (
+        {cautionsFor({ hemisphere }).map((c) => (
           <li key={c.id} className="text-[0.9375rem] leading-relaxed text-bark-900">
             <span className="font-bold">{c.title}. </span>
             {c.text}

@@ -162,7 +162,7 @@ export function PlacementPlanner({ signedIn, siteId }: PlacementPlannerProps) {
               defaultName={loaded?.name}
             />
           ) : null}
-          <PlacementCautions />
+          <PlacementCautions hemisphere={answer?.location.hemisphere ?? (typeof lat === "number" && lat < 0 ? "south" : "north")} />
         </div>
       </div>
     </FormProvider>

@@ -63,7 +63,7 @@ describe("seasonal reminders", () => {
       data: { seasonalReminders: true },
     });
     expect(await queueSeasonalReminders({ now: DECEMBER })).toEqual({
-      reminder: { id: "winter-check", season: "winter", seasonKey: "winter-check-2030" },
+      reminder: { id: "winter-check", season: "winter", hemisphere: "north", seasonKey: "winter-check-2030" },
       queued: 1,
     });
     // The next day's run, or a second app instance, adds nothing.

@@ -121,7 +121,7 @@ describe("the install guide", () => {
     });
     const { text } = await sentGuide(orderId);
     expect(text).toMatch(
-      /From your saved site check "North barn": cool summers \(average July high about 76 °F/,
+      /From your saved site check "North barn": cool summers \(average daily high in July, your warmest month, about 76 °F/,
     );
     expect(text).toMatch(/black or dark outside/);
     expect(text).toMatch(/more sun/);
