@@ -1,5 +1,6 @@
 import "server-only";
 import { z } from "zod";
+import { queryDecimal } from "@/lib/http/query-number";
 import { getDb } from "@/db/client";
 import { climateStations } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
@@ -35,16 +36,20 @@ export function getStationIndex(): Promise<StationIndex | null> {
 export const climateQuerySchema = z
   .object({
     zip: z.string().trim().optional(),
-    julyHighF: z.coerce
-      .number({ error: "Type the July high as a number." })
-      .min(-20, "A July high below -20 °F is not plausible; check the number.")
-      .max(135, "A July high above 135 °F is not plausible; check the number.")
-      .optional(),
-    julyHighC: z.coerce
-      .number({ error: "Type the July high as a number." })
-      .min(-29, "A July high below -29 °C is not plausible; check the number.")
-      .max(57, "A July high above 57 °C is not plausible; check the number.")
-      .optional(),
+    julyHighF: queryDecimal(
+      z
+        .number({ error: "Type the July high as a number." })
+        .min(-20, "A July high below -20 °F is not plausible; check the number.")
+        .max(135, "A July high above 135 °F is not plausible; check the number.")
+        .optional(),
+    ),
+    julyHighC: queryDecimal(
+      z
+        .number({ error: "Type the July high as a number." })
+        .min(-29, "A July high below -29 °C is not plausible; check the number.")
+        .max(57, "A July high above 57 °C is not plausible; check the number.")
+        .optional(),
+    ),
   })
   .refine((q) => [q.zip, q.julyHighF, q.julyHighC].filter((v) => v !== undefined && v !== "").length === 1, {
     message: "Give a ZIP code or a July high (in °F or °C), one of them.",
