@@ -26,17 +26,19 @@ export const authOptions: NextAuthOptions = {
       if (user) {
         token.id = user.id;
         token.role = user.role;
+        token.sessionVersion = user.sessionVersion ?? 0;
         return token;
       }
       // Re-read the role so an admin's change takes effect on the next request.
       if (typeof token.id === "string") {
         const db = await getDb();
         const [row] = await db
-          .select({ role: users.role, name: users.name })
+          .select({ role: users.role, name: users.name, sessionVersion: users.sessionVersion })
           .from(users)
           .where(eq(users.id, token.id))
           .limit(1);
-        if (!row) return { ...token, id: undefined, role: undefined };
+        // Gone, or signed in before a password reset or a role change: no session any more.
+        if (!row || row.sessionVersion !== (token.sessionVersion ?? 0)) return { ...token, id: undefined, role: undefined };
         token.role = row.role;
         token.name = row.name;
       }
