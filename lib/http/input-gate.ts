@@ -79,8 +79,9 @@ async function bodyProblem(request: Request): Promise<InputProblem | null> {
   try {
     parsed = JSON.parse(text);
   } catch {
-    // Not JSON: the handler's own parser answers with its message; a raw NUL is refused here.
-    return text.includes("\u0000") ? { field: "body", message: "The body contains a NUL character, which is not allowed." } : null;
+    // Declared JSON but not JSON: refused here, so no handler (next-auth's included) throws on it.
+    if (type.includes("json") || text.includes("\u0000")) return { field: "body", message: "The request body must be JSON." };
+    return null;
   }
   return valueProblem(parsed, []);
 }
