@@ -36,6 +36,9 @@ export const users = pgTable(
     name: text("name").notNull(),
     passwordHash: text("password_hash").notNull(),
     role: roleEnum("role").notNull().default("customer"),
+    // Stored in the session token at sign-in and compared on every request: a password reset
+    // or a role change bumps it, which ends every session signed in before.
+    sessionVersion: integer("session_version").notNull().default(0),
     ...timestamps,
   },
   (t) => [uniqueIndex("users_email_key").on(t.email)],

@@ -7,6 +7,7 @@ declare module "next-auth" {
   interface User {
     id: string;
     role: Role;
+    sessionVersion?: number;
   }
 }
 
@@ -14,5 +15,7 @@ declare module "next-auth/jwt" {
   interface JWT {
     id?: string;
     role?: Role;
+    /** users.session_version at sign-in; a different value in the database ends the session. */
+    sessionVersion?: number;
   }
 }

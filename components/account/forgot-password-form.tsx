@@ -1,9 +1,9 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useState } from "react";
+import { useActionState, useState } from "react";
 import { useForm } from "react-hook-form";
-import { forgotPasswordAction } from "@/lib/mail/actions";
+import { forgotPasswordAction, forgotPasswordFormAction } from "@/lib/mail/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
@@ -14,6 +14,9 @@ import { forgotPasswordSchema, type ForgotPassword } from "@/lib/mail/password-r
 export function ForgotPasswordForm() {
   const [error, setError] = useState<string | null>(null);
   const [answer, setAnswer] = useState<string | null>(null);
+  // Without script the form posts to this action (the address in the body, not the URL).
+  const [posted, postAction] = useActionState(forgotPasswordFormAction, null);
+  const shownAnswer = answer ?? (posted?.ok ? posted.data.message : null);
   const form = useForm<ForgotPassword>({
     resolver: zodResolver(forgotPasswordSchema),
     defaultValues: { email: "" },
@@ -33,17 +36,17 @@ export function ForgotPasswordForm() {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <FormError message={error} />
-      <Field label="E-mail" error={errors.email?.message} required>
+    <form action={postAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
+      <FormError message={error ?? (posted && !posted.ok ? posted.error.message : null)} />
+      <Field label="E-mail" error={errors.email?.message ?? (posted && !posted.ok ? posted.error.fields?.email : undefined)} required>
         <Input type="email" autoComplete="email" {...form.register("email")} />
       </Field>
       <Button type="submit" loading={isSubmitting}>
         Send the link
       </Button>
-      {answer ? (
+      {shownAnswer ? (
         <Alert tone="good" title="Check your inbox" live>
-          {answer}
+          {shownAnswer}
         </Alert>
       ) : null}
     </form>

@@ -1,9 +1,9 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useState } from "react";
+import { useActionState, useState } from "react";
 import { useForm } from "react-hook-form";
-import { resetPasswordAction } from "@/lib/mail/actions";
+import { resetPasswordAction, resetPasswordFormAction } from "@/lib/mail/actions";
 import { Alert } from "@/components/ui/alert";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
@@ -15,6 +15,9 @@ import { resetPasswordSchema, type ResetPassword } from "@/lib/mail/password-res
 export function ResetPasswordForm({ token }: { token: string }) {
   const [error, setError] = useState<string | null>(null);
   const [done, setDone] = useState(false);
+  // Without script the form posts to this action (the passwords in the body, not the URL).
+  const [posted, postAction] = useActionState(resetPasswordFormAction, null);
+  const postedFields = posted && !posted.ok ? (posted.error.fields ?? {}) : {};
   const form = useForm<ResetPassword>({
     resolver: zodResolver(resetPasswordSchema),
     defaultValues: { token, password: "", confirm: "" },
@@ -34,7 +37,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
     setDone(true);
   });
 
-  if (done) {
+  if (done || posted?.ok) {
     return (
       <div className="flex flex-col gap-4">
         <Alert tone="good" title="Your password is changed" live>
@@ -46,18 +49,18 @@ export function ResetPasswordForm({ token }: { token: string }) {
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <FormError message={error} />
-      <input type="hidden" {...form.register("token")} />
+    <form action={postAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
+      <FormError message={error ?? (posted && !posted.ok ? posted.error.message : null)} />
+      <input type="hidden" defaultValue={token} {...form.register("token")} />
       <Field
         label="New password"
         hint={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one; common passwords are refused.`}
-        error={errors.password?.message}
+        error={errors.password?.message ?? postedFields.password}
         required
       >
         <Input type="password" autoComplete="new-password" {...form.register("password")} />
       </Field>
-      <Field label="New password again" error={errors.confirm?.message} required>
+      <Field label="New password again" error={errors.confirm?.message ?? postedFields.confirm} required>
         <Input type="password" autoComplete="new-password" {...form.register("confirm")} />
       </Field>
       <Button type="submit" loading={isSubmitting}>

@@ -3,17 +3,21 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { signIn } from "next-auth/react";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useActionState, useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { FormError } from "@/components/ui/form-error";
+import { signInFormAction } from "@/lib/auth/actions";
 import { signInSchema, type SignIn } from "@/lib/auth/password-policy";
 
 export function SignInForm({ next }: { next: string }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
+  // Without script the browser posts the form to this server action (the fields in the body,
+  // never in the URL); with script onSubmit takes over and the action is not called.
+  const [posted, postAction] = useActionState(signInFormAction, null);
   const form = useForm<SignIn>({ resolver: zodResolver(signInSchema), defaultValues: { email: "", password: "" } });
   const { errors, isSubmitting } = form.formState;
 
@@ -29,8 +33,9 @@ export function SignInForm({ next }: { next: string }) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <FormError message={error} />
+    <form action={postAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
+      <FormError message={error ?? (posted && !posted.ok ? posted.error.message : null)} />
+      <input type="hidden" name="next" value={next} />
       <Field label="E-mail" error={errors.email?.message} required>
         <Input type="email" autoComplete="email" {...form.register("email")} />
       </Field>

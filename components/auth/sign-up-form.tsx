@@ -3,9 +3,10 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { signIn } from "next-auth/react";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useActionState, useState } from "react";
 import { useForm } from "react-hook-form";
 import { signUpAction } from "@/lib/accounts/actions";
+import { signUpFormAction } from "@/lib/auth/actions";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormError } from "@/components/ui/form-error";
@@ -15,6 +16,10 @@ import { PASSWORD_MIN, signUpSchema, type SignUp } from "@/lib/auth/password-pol
 export function SignUpForm({ next }: { next: string }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
+  // Without script the browser posts the form to this server action (never a GET with the
+  // password in the URL); with script onSubmit takes over.
+  const [posted, postAction] = useActionState(signUpFormAction, null);
+  const postedFields = posted && !posted.ok ? (posted.error.fields ?? {}) : {};
   const form = useForm<SignUp>({ resolver: zodResolver(signUpSchema), defaultValues: { name: "", email: "", password: "" } });
   const { errors, isSubmitting } = form.formState;
 
@@ -34,18 +39,19 @@ export function SignUpForm({ next }: { next: string }) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <FormError message={error} />
-      <Field label="Your name" error={errors.name?.message} required>
+    <form action={postAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
+      <FormError message={error ?? (posted && !posted.ok ? posted.error.message : null)} />
+      <input type="hidden" name="next" value={next} />
+      <Field label="Your name" error={errors.name?.message ?? postedFields.name} required>
         <Input autoComplete="name" {...form.register("name")} />
       </Field>
-      <Field label="E-mail" error={errors.email?.message} required>
+      <Field label="E-mail" error={errors.email?.message ?? postedFields.email} required>
         <Input type="email" autoComplete="email" {...form.register("email")} />
       </Field>
       <Field
         label="Password"
         hint={`At least ${PASSWORD_MIN} characters. A few unrelated words make a strong one; common passwords are refused.`}
-        error={errors.password?.message}
+        error={errors.password?.message ?? postedFields.password}
         required
       >
         <Input type="password" autoComplete="new-password" {...form.register("password")} />

@@ -1,5 +1,5 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { users } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/passwords";
@@ -28,7 +28,12 @@ export async function setUserRole({ id, role, actorId }: { id: string; role: Rol
     throw new AppError("conflict", "You cannot take away your own administrator role; ask another administrator.");
   }
   const db = await getDb();
-  const [row] = await db.update(users).set({ role }).where(eq(users.id, id)).returning({ id: users.id });
+  // A new role ends the account's sessions: it signs in again and gets the role's own pages.
+  const [row] = await db
+    .update(users)
+    .set({ role, sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, id))
+    .returning({ id: users.id });
   if (!row) throw new AppError("not_found", "No account has that id.");
   return row;
 }

@@ -1,3 +1,5 @@
+import { env } from "@/lib/config/env";
+import { resolveClientAddress } from "@/lib/http/client-address";
 import { recordSignInAttempt } from "./commands";
 import { signInSchema } from "./password-policy";
 import { verifyPassword } from "./passwords";
@@ -13,7 +15,7 @@ export class SignInRefused extends Error {
 export async function authenticate(
   input: unknown,
   ip: string,
-): Promise<{ id: string; name: string; email: string; role: Role }> {
+): Promise<{ id: string; name: string; email: string; role: Role; sessionVersion: number }> {
   const parsed = signInSchema.safeParse(input);
   if (!parsed.success) throw new SignInRefused("Enter your e-mail address and password.");
   const { email, password } = parsed.data;
@@ -23,15 +25,14 @@ export async function authenticate(
   const ok = await verifyPassword(password, user?.passwordHash ?? null);
   await recordSignInAttempt({ email, ip, succeeded: ok });
   if (!ok || !user) throw new SignInRefused("That e-mail and password don't match an account here.");
-  return { id: user.id, name: user.name, email: user.email, role: user.role };
+  return { id: user.id, name: user.name, email: user.email, role: user.role, sessionVersion: user.sessionVersion };
 }
 
+/** The address sign-in throttling counts by: forwarded headers only through our own proxies. */
 export function clientAddress(headers: Record<string, unknown> | Headers | undefined): string {
-  const get = (name: string): string | undefined => {
-    if (!headers) return undefined;
-    if (headers instanceof Headers) return headers.get(name) ?? undefined;
-    const value = headers[name];
-    return typeof value === "string" ? value : undefined;
-  };
-  return get("x-forwarded-for")?.split(",")[0]?.trim() || get("x-real-ip") || "local";
+  const forwarded = headers instanceof Headers ? headers.get("x-forwarded-for") : headers?.["x-forwarded-for"];
+  return resolveClientAddress({
+    forwardedFor: typeof forwarded === "string" ? forwarded : Array.isArray(forwarded) ? forwarded.join(",") : null,
+    trustedProxies: env().TRUSTED_PROXY_COUNT,
+  });
 }

@@ -1,6 +1,6 @@
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
-import { getUserById } from "@/lib/accounts/queries";
+import { getSessionFacts } from "./queries";
 import { env } from "@/lib/config/env";
 import { authenticate, clientAddress } from "./credentials";
 import { isRole } from "./roles";
@@ -24,12 +24,14 @@ export const authOptions: NextAuthOptions = {
       if (user) {
         token.id = user.id;
         token.role = user.role;
+        token.sessionVersion = user.sessionVersion ?? 0;
         return token;
       }
       // Re-read the role so an admin's change takes effect on the next request.
       if (typeof token.id === "string") {
-        const row = await getUserById({ id: token.id });
-        if (!row) return { ...token, id: undefined, role: undefined };
+        const row = await getSessionFacts({ id: token.id });
+        // Gone, or signed in before a password reset or a role change: no session any more.
+        if (!row || row.sessionVersion !== (token.sessionVersion ?? 0)) return { ...token, id: undefined, role: undefined };
         token.role = row.role;
         token.name = row.name;
       }

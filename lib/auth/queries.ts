@@ -32,3 +32,14 @@ export async function countRecentSignInFailures({
   };
   return { accountFailures: await failuresFor(signInAttempts.email, email), addressFailures: await failuresFor(signInAttempts.ip, ip) };
 }
+
+/** What each request re-reads about the signed-in account: its role, its name and its session version. */
+export async function getSessionFacts({ id }: { id: string }): Promise<{ role: User["role"]; name: string; sessionVersion: number } | null> {
+  const db = await getDb();
+  const [row] = await db
+    .select({ role: users.role, name: users.name, sessionVersion: users.sessionVersion })
+    .from(users)
+    .where(eq(users.id, id))
+    .limit(1);
+  return row ?? null;
+}

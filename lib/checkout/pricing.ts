@@ -145,6 +145,18 @@ export function parcelRateCents({
 }
 
 function priceParcels(lines: readonly OrderLineInput[], rateTiers: readonly RateTier[]): Parcel[] {
+  if (rateTiers.length === 0) {
+    // Name the parcel the missing rate is for, so the buyer and the staff reading the message
+    // know which rate to add (an empty table must never ship for free).
+    const first = lines[0]!;
+    const { billableLb } = billableWeightLb(first.carton);
+    throw new PricingError(
+      "no_rate_tiers",
+      "rateTiers",
+      `No shipping rate is set up yet, so the ${first.name} parcel (${billableLb} lb billable) can't be priced. ` +
+        "Choose local pickup, or ask the center to add a shipping rate that covers it.",
+    );
+  }
   const tiers = sortedTiers(rateTiers);
   const heaviest = tiers[tiers.length - 1];
   const parcels: Parcel[] = [];

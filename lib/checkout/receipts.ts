@@ -14,7 +14,16 @@ export const ACKNOWLEDGMENT_THRESHOLD_CENTS = 25_000;
 
 export type ReceiptKind = "gift" | "mixed" | "purchase";
 
+/** One of the goods or services provided in return, at its good-faith value. */
+export type GoodsItem = { description: string; valueCents: number };
+
 export type ReceiptInput = {
+  /**
+   * What was provided in return, listed by the written acknowledgment: 26 U.S.C. §170(f)(8)(B)(ii)
+   * and (iii) ask for a description and a good-faith estimate of the value of any goods or
+   * services (IRS Publication 1771); PRODUCT.md §6 says: list the houses.
+   */
+  goods?: readonly GoodsItem[];
   /** Everything the payer paid, sales tax included. */
   amountPaidCents: number;
   /** Good-faith estimate of goods and services: items at list price plus shipping charged. */
@@ -34,6 +43,7 @@ export type Receipt = {
   disclosureRequired: boolean;
   /** Deductible contribution of $250 or more: the receipt is the §170(f)(8) written acknowledgment. */
   acknowledgmentRequired: boolean;
+  goods: GoodsItem[];
   /** The sentences the receipt prints, in order (the organization's name and the date go in its heading). */
   statements: string[];
 };
@@ -79,6 +89,13 @@ function statementsFor(receipt: Omit<Receipt, "statements">): string[] {
       "Our good-faith estimate of the value of the goods and services you received " +
         `(items at list price plus shipping) is ${formatUsd(goodsValueCents)}.`,
     );
+    if (receipt.goods.length > 0) {
+      lines.push(
+        "Goods and services provided in return for your payment: " +
+          receipt.goods.map((g) => `${g.description}, ${formatUsd(g.valueCents)}`).join("; ") +
+          ".",
+      );
+    }
     lines.push(
       "For federal income tax purposes, your deductible contribution is limited to the amount you paid " +
         `above the value of those goods and services: ${formatUsd(deductibleCents)}.`,
@@ -134,8 +151,26 @@ export function receiptFor(input: ReceiptInput): Receipt {
     disclosureRequired: kind === "mixed" && amountPaidCents > DISCLOSURE_THRESHOLD_CENTS,
     acknowledgmentRequired:
       kind !== "purchase" && deductibleCents >= ACKNOWLEDGMENT_THRESHOLD_CENTS,
+    // A gift alone received nothing (its statement says so); a purchase is no contribution.
+    goods: kind === "mixed" ? [...(input.goods ?? [])] : [],
   };
   return { ...receipt, statements: statementsFor(receipt) };
+}
+
+/** The goods of an order as the acknowledgment lists them: each house at list price, then shipping. */
+export function goodsOfOrder({
+  lines,
+  shippingCents,
+}: {
+  lines: readonly { name: string; quantity: number; unitPriceCents: number }[];
+  shippingCents: number;
+}): GoodsItem[] {
+  const goods: GoodsItem[] = lines.map((l) => ({
+    description: `${l.quantity} × ${l.name} bat house`,
+    valueCents: l.quantity * l.unitPriceCents,
+  }));
+  if (shippingCents > 0) goods.push({ description: "shipping", valueCents: shippingCents });
+  return goods;
 }
 
 export type GiftRecord = { date: Date | string; amountCents: number; orderId: string };

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { queryDecimal } from "@/lib/http/query-number";
 import type { ClimateInput } from "./resolve";
 
 // GET /api/climate: a ZIP code, a latitude/longitude, or a typed value in °F or °C (the average
@@ -6,23 +7,23 @@ import type { ClimateInput } from "./resolve";
 // Plausible ranges: the U.S. normals run from about 40 °F (arctic Alaska) to 116.5 °F (Death
 // Valley); the limits leave room either side. Common practice, no source.
 
-const number = (what: string) => z.coerce.number({ error: `Type the ${what} as a number.` });
-const highF = number("temperature")
-  .min(-20, "A summer high below -20 °F is not plausible; check the number.")
-  .max(135, "A summer high above 135 °F is not plausible; check the number.");
-const highC = number("temperature")
-  .min(-29, "A summer high below -29 °C is not plausible; check the number.")
-  .max(57, "A summer high above 57 °C is not plausible; check the number.");
+// Numbers are read as plain decimal digits only ("0x10" or "1e2" is refused, not read as 16 or 100).
+const number = (what: string, min: number, max: number, tooLow?: string, tooHigh?: string) =>
+  queryDecimal(z.number({ error: `Type the ${what} as a number.` }).min(min, tooLow).max(max, tooHigh).optional());
+const highF = () =>
+  number("temperature", -20, 135, "A summer high below -20 °F is not plausible; check the number.", "A summer high above 135 °F is not plausible; check the number.");
+const highC = () =>
+  number("temperature", -29, 57, "A summer high below -29 °C is not plausible; check the number.", "A summer high above 57 °C is not plausible; check the number.");
 
 export const climateQuerySchema = z
   .object({
     zip: z.string().trim().optional(),
-    lat: number("latitude").min(-90).max(90).optional(),
-    lon: number("longitude").min(-180).max(180).optional(),
-    highF: highF.optional(),
-    highC: highC.optional(),
-    julyHighF: highF.optional(),
-    julyHighC: highC.optional(),
+    lat: number("latitude", -90, 90),
+    lon: number("longitude", -180, 180),
+    highF: highF(),
+    highC: highC(),
+    julyHighF: highF(),
+    julyHighC: highC(),
   })
   .transform((q) => ({
     zip: q.zip === "" ? undefined : q.zip,

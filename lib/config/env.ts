@@ -31,6 +31,13 @@ const envSchema = z.object({
   S3_REGION: z.string().default("us-east-1"),
   UPLOADS_PORT: z.coerce.number().int().default(12113),
   LOG_LEVEL: z.enum(["debug", "info", "warn", "error"]).default("info"),
+  // How many proxies of ours stand in front of the app and append to X-Forwarded-For. 0 (the
+  // default) ignores forwarded headers: every address-based limit then reads the connection.
+  TRUSTED_PROXY_COUNT: z
+    .string()
+    .regex(/^\d{1,2}$/, "TRUSTED_PROXY_COUNT must be a whole number of proxies (0 when none)")
+    .default("0")
+    .transform(Number),
 });
 
 type RawEnv = z.infer<typeof envSchema>;

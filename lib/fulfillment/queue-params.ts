@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { queryInt } from "@/lib/http/query-number";
 import { OPEN_STATES } from "@/lib/orders/state-machine";
 import { PAID_STATES, type PaidState } from "@/lib/orders/statuses";
 
@@ -39,14 +40,15 @@ export const queueParamsSchema = z
     dir: z.preprocess(blankToUndefined, z.enum(["asc", "desc"], "Sort up or down.").default("asc")),
     page: z.preprocess(
       blankToUndefined,
-      z.coerce.number().int("Pages are whole numbers.").min(1, "Pages start at 1.").max(100_000, "That page is too far.").default(1),
+      queryInt(z.number({ error: "Pages are whole numbers." }).int("Pages are whole numbers.").min(1, "Pages start at 1.").max(100_000, "That page is too far.")).default(1),
     ),
     pageSize: z.preprocess(
       blankToUndefined,
-      z.coerce
-        .number()
-        .refine((n) => (PAGE_SIZES as readonly number[]).includes(n), `Show ${PAGE_SIZES.join(", ")} orders per page.`)
-        .default(25),
+      queryInt(
+        z
+          .number({ error: `Show ${PAGE_SIZES.join(", ")} orders per page.` })
+          .refine((n) => (PAGE_SIZES as readonly number[]).includes(n), `Show ${PAGE_SIZES.join(", ")} orders per page.`),
+      ).default(25),
     ),
   })
   .refine((p) => !p.from || !p.to || p.from <= p.to, {

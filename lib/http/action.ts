@@ -4,6 +4,7 @@ import { requireUser } from "@/lib/auth/guard";
 import type { Permission } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session";
 import { badInput, toErrorBody, type ErrorBody } from "./errors";
+import { gateValue } from "./input-gate";
 
 export type ActionResult<T> = { ok: true; data: T } | ({ ok: false } & ErrorBody);
 
@@ -20,6 +21,7 @@ export function action<S extends z.ZodType, T>(
 ): (input: unknown) => Promise<ActionResult<T>> {
   return async (input: unknown) => {
     try {
+      gateValue(input);
       let user: SessionUser | null = null;
       if ("permission" in access) user = await requireUser(access.permission);
       else if ("signedIn" in access) user = await requireUser();
@@ -31,6 +33,24 @@ export function action<S extends z.ZodType, T>(
       return { ok: false, ...toErrorBody(error).body };
     }
   };
+}
+
+/**
+ * The same action answering a plain form post (`<form action={…}>` through useActionState), so
+ * the form works before or without the page's script: the fields arrive as FormData, and the
+ * framework's own `$ACTION_…` fields are left out.
+ */
+export function formAction<T>(run: (input: unknown) => Promise<ActionResult<T>>) {
+  return async (_previous: ActionResult<T> | null, form: FormData): Promise<ActionResult<T>> => run(formFields(form));
+}
+
+export function formFields(form: FormData): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const [key, value] of form.entries()) {
+    if (key.startsWith("$ACTION_") || typeof value !== "string") continue;
+    fields[key] = value;
+  }
+  return fields;
 }
 
 // redirect() and notFound() work by throwing; they must pass through.

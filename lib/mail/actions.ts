@@ -2,7 +2,7 @@
 
 import { revalidatePath } from "next/cache";
 import { z } from "zod";
-import { action } from "@/lib/http/action";
+import { action, formAction } from "@/lib/http/action";
 import { preferencesSchema, unsubscribeSchema, yearEndRequestSchema } from "@/lib/mail/account-schemas";
 import { resendOutboxMessage } from "@/lib/mail/commands/outbox";
 import { requestYearEndStatement } from "@/lib/mail/commands/year-end";
@@ -67,3 +67,13 @@ export const resendMailAction = action(
     return result;
   },
 );
+
+// The same two actions answering a plain form post, for a page whose script has not run.
+const forgotPasswordForm = formAction(forgotPasswordAction);
+export async function forgotPasswordFormAction(...args: Parameters<typeof forgotPasswordForm>) {
+  return forgotPasswordForm(...args);
+}
+const resetPasswordForm = formAction(resetPasswordAction);
+export async function resetPasswordFormAction(...args: Parameters<typeof resetPasswordForm>) {
+  return resetPasswordForm(...args);
+}

@@ -43,7 +43,7 @@ function shipToText(shipTo: unknown): string | null {
 
 function confirmation(data: OrderForMail): Composition {
   const { order } = data;
-  const receipt = receiptForOrder(order);
+  const receipt = receiptForOrder(order, data.lines);
   return {
     element: createElement(OrderConfirmationEmail, {
       org: data.org,
@@ -75,7 +75,7 @@ async function giftReceipt(db: DbOrTx, data: OrderForMail): Promise<Composition>
       date: formatMailDate(gift.receivedAt),
       amountPaidCents: data.order.totalCents,
       giftCents: gift.amountCents,
-      receipt: receiptForOrder(data.order),
+      receipt: receiptForOrder(data.order, data.lines),
     }),
   };
 }

@@ -1,4 +1,4 @@
-import { receiptFor, type Receipt } from "@/lib/checkout/receipts";
+import { goodsOfOrder, receiptFor, type Receipt } from "@/lib/checkout/receipts";
 
 export type OrderAmounts = {
   subtotalCents: number;
@@ -13,8 +13,12 @@ export type OrderAmounts = {
  * of goods and services is the items at list price plus shipping charged, sales tax is passed
  * on its own, and the gift is the rest (PRODUCT.md §6; lib/checkout/receipts.ts).
  */
-export function receiptForOrder(order: OrderAmounts): Receipt {
+export function receiptForOrder(
+  order: OrderAmounts,
+  lines: readonly { name: string; quantity: number; unitPriceCents: number }[] = [],
+): Receipt {
   return receiptFor({
+    goods: goodsOfOrder({ lines, shippingCents: order.shippingCents }),
     amountPaidCents: order.totalCents,
     goodsValueCents: order.subtotalCents + order.shippingCents,
     salesTaxCents: order.taxCents,

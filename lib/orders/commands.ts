@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq, sql } from "drizzle-orm";
 import type { Tx } from "@/db/client";
-import { orderEvents, orders, parcels, type OrderRow } from "@/db/schema";
+import { orderEvents, orders, organization, parcels, type OrderRow } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
 import { enqueueEmail } from "@/lib/mail/commands/outbox";
 import { messagesForChange } from "./messages";
@@ -101,7 +101,9 @@ export async function changeOrderStatus(
   const updated = await writeVersion(tx, order, { ...change.set, status: to });
   const note = typeof change.note === "function" ? change.note(check.kind) : change.note;
   await tx.insert(orderEvents).values({ orderId: order.id, fromStatus: order.status, toStatus: to, actorId: actor.id, note });
-  for (const message of messagesForChange({ order: updated, to, kind: check.kind })) await enqueueEmail(tx, message);
+  // The gift receipt's subject names the center as its settings do.
+  const centerName = to === "paid" && updated.giftCents > 0 ? await centerDisplayName(tx) : null;
+  for (const message of messagesForChange({ order: updated, to, kind: check.kind, centerName })) await enqueueEmail(tx, message);
   return { order: updated, kind: check.kind };
 }
 
@@ -134,4 +136,9 @@ export async function openOrder(tx: Tx, { values, actor, note }: { values: NewOr
   if (!row) throw new Error("order insert returned nothing");
   await tx.insert(orderEvents).values({ orderId: row.id, fromStatus: null, toStatus: row.status, actorId: actor.id, note });
   return row;
+}
+
+async function centerDisplayName(tx: Tx): Promise<string | null> {
+  const [row] = await tx.select({ name: organization.displayName }).from(organization).where(eq(organization.id, 1));
+  return row?.name ?? null;
 }

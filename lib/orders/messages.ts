@@ -13,7 +13,10 @@ export type OrderMessage = OutboxMessageInput;
 
 type OrderForMail = { id: string; number: number; email: string; method: string; giftCents: number };
 
-function paidMessages(order: OrderForMail): OrderMessage[] {
+/** The center's name as its settings give it (organization.display_name); the mail says "us" without one. */
+type Center = { centerName?: string | null };
+
+function paidMessages(order: OrderForMail, { centerName }: Center = {}): OrderMessage[] {
   const number = formatOrderNumber(order.number);
   const hasItems = order.method !== "none";
   const messages: OrderMessage[] = [
@@ -39,7 +42,7 @@ function paidMessages(order: OrderForMail): OrderMessage[] {
       dedupeKey: `gift-receipt:${order.id}`,
       kind: "gift-receipt",
       to: order.email,
-      subject: `Your gift receipt from Cedar Hollow Wildlife Rescue (${number})`,
+      subject: centerName ? `Your gift receipt from ${centerName} (${number})` : `Your gift receipt (${number})`,
       payload: { orderId: order.id },
     });
   }
@@ -47,12 +50,12 @@ function paidMessages(order: OrderForMail): OrderMessage[] {
 }
 
 /** The messages to queue when an order reaches `to` by moving forward; corrections queue none. */
-export function messagesForArrival({ order, to }: { order: OrderForMail; to: OrderStatus }): OrderMessage[] {
+export function messagesForArrival({ order, to, centerName }: { order: OrderForMail; to: OrderStatus } & Center): OrderMessage[] {
   const number = formatOrderNumber(order.number);
   const base = { to: order.email, payload: { orderId: order.id } };
   switch (to) {
     case "paid":
-      return paidMessages(order);
+      return paidMessages(order, { centerName });
     case "shipped":
       return [{ ...base, kind: "shipped", dedupeKey: `shipped:${order.id}`, subject: `Order ${number} is with the carrier` }];
     case "delivered":
@@ -85,10 +88,11 @@ export function messagesForChange({
   order,
   to,
   kind,
+  centerName,
 }: {
   order: OrderForMail;
   to: OrderStatus;
   kind: TransitionKind;
-}): OrderMessage[] {
-  return kind === "advance" ? messagesForArrival({ order, to }) : [];
+} & Center): OrderMessage[] {
+  return kind === "advance" ? messagesForArrival({ order, to, centerName }) : [];
 }

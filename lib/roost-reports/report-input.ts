@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { queryInt } from "@/lib/http/query-number";
 import { COUNT_BANDS, ROOST_ANSWERS } from "./answers";
 
 // Inputs of roost reports, with the words a buyer or staff member reads beside each field.
@@ -28,8 +29,8 @@ function countOnlyWithBats(input: { answer: string; countBand?: string }, ctx: z
 export const houseReportSchema = z
   .object({
     orderLineId: z.uuid("Choose a house from this order."),
-    unit: z.coerce.number({ error: "Choose a house from this order." }).int().min(1).max(10),
-    season: z.coerce.number({ error: "Choose the season." }).int().min(2000).max(9999),
+    unit: queryInt(z.number({ error: "Choose a house from this order." }).int().min(1).max(10)),
+    season: queryInt(z.number({ error: "Choose the season." }).int().min(2000).max(9999)),
     answer: z.enum(ROOST_ANSWERS, { error: "Choose what you saw this season." }),
     countBand,
     note,

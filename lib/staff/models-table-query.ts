@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { queryInt } from "@/lib/http/query-number";
 import type { CertificationStateId } from "@/lib/catalog/certification";
 import type { ModelStatus } from "./status-words";
 
@@ -51,18 +52,22 @@ export const modelsQuerySchema = z.object({
     .default("all"),
   sort: z.enum(SORT_KEYS, { error: "Sort by one of the table's columns." }).default("name"),
   dir: z.enum(["asc", "desc"], { error: "Sort up (asc) or down (desc)." }).default("asc"),
-  page: z.coerce
-    .number({ error: "The page must be a number." })
-    .int("The page must be a whole number.")
-    .min(1, "Pages start at 1.")
-    .default(1),
-  pageSize: z.coerce
-    .number({ error: "The page size must be a number." })
-    .refine(
-      (n) => (PAGE_SIZES as readonly number[]).includes(n),
-      "Show 10, 25 or 50 models a page.",
-    )
-    .default(10),
+  page: queryInt(
+    z
+      .number({ error: "The page must be a whole number." })
+      .int("The page must be a whole number.")
+      .min(1, "Pages start at 1.")
+      .default(1),
+  ),
+  pageSize: queryInt(
+    z
+      .number({ error: "The page size must be a number." })
+      .refine(
+        (n) => (PAGE_SIZES as readonly number[]).includes(n),
+        "Show 10, 25 or 50 models a page.",
+      )
+      .default(10),
+  ),
 });
 export type ModelsQuery = z.infer<typeof modelsQuerySchema>;
 

@@ -1,17 +1,17 @@
 import { NextResponse } from "next/server";
 import { getImage, IMMUTABLE_CACHE } from "@/lib/uploads/object-store";
 import { parseMediaKey } from "@/lib/uploads/photo-keys";
-import { jsonError } from "@/lib/http/route";
+import { gated, jsonError } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";
 
 // Public: model photos are shown in the catalog. Only keys of the shape the server generates are
 // served (photos/<uuid>-<width>.webp), so this route cannot be used to read anything else in the
 // bucket. Stored sizes never change, hence the year-long cache.
-export async function GET(
+export const GET = gated(async (
   _request: Request,
   context: { params: Promise<{ key: string[] }> },
-): Promise<Response> {
+): Promise<Response> => {
   const { key: segments } = await context.params;
   const parsed = parseMediaKey(segments);
   if (!parsed)
@@ -38,4 +38,4 @@ export async function GET(
   } catch (error) {
     return jsonError(error);
   }
-}
+});

@@ -2,7 +2,7 @@ import "server-only";
 import { randomBytes } from "node:crypto";
 import { and, eq, lt, sql } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db/client";
-import { orderLines, orders, sites, type OrderRow } from "@/db/schema";
+import { orderLines, orders, organization, sites, type OrderRow } from "@/db/schema";
 import type { SessionUser } from "@/lib/auth/session";
 import { NO_ORDER_BAND, type OrderBand } from "@/lib/climate/order-band";
 import { AppError } from "@/lib/http/errors";
@@ -96,6 +96,7 @@ export async function startCheckout(
     return row;
   });
 
+  const center = await centerName();
   let intent;
   try {
     intent = await getPayments().paymentIntents.create(
@@ -104,7 +105,7 @@ export async function startCheckout(
         currency: "usd",
         automatic_payment_methods: { enabled: true },
         receipt_email: order.email,
-        description: `Cedar Hollow Wildlife Rescue order ${order.number}`,
+        description: center ? `${center} order ${order.number}` : `Order ${order.number}`,
         metadata: { orderId: order.id },
       },
       { idempotencyKey: `order-${order.id}` },
@@ -196,4 +197,11 @@ export async function expireStaleReservations(now = new Date()): Promise<number>
     }
   }
   return expired;
+}
+
+/** The center's name from its settings (organization.display_name), for the payment's description. */
+async function centerName(): Promise<string | null> {
+  const db = await getDb();
+  const [row] = await db.select({ name: organization.displayName }).from(organization).where(eq(organization.id, 1));
+  return row?.name ?? null;
 }

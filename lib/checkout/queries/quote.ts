@@ -67,7 +67,8 @@ export async function quoteFromDatabase(
         return { slug: m.slug, name: m.name, unitPriceCents: m.priceCents, quantity: item.quantity, carton: m.carton };
       }),
       method,
-      rateTiers: tiers.length ? tiers : [{ maxBillableLb: 1_000, cents: 0 }],
+      // An empty table is refused by the pricing rule with the missing rate named, never free.
+      rateTiers: tiers,
       taxRateBasisPoints: tax?.basisPoints ?? 0,
       giftCents,
     });

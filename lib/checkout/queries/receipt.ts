@@ -1,8 +1,8 @@
 import "server-only";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { organization, type OrderRow } from "@/db/schema";
-import { receiptFor, type Receipt } from "../receipts";
+import { orderLines, organization, type OrderRow } from "@/db/schema";
+import { goodsOfOrder, receiptFor, type Receipt } from "../receipts";
 
 export type OrderReceipt = Receipt & {
   refundedCents: number;
@@ -14,7 +14,10 @@ export type OrderReceipt = Receipt & {
  * The receipt for a paid order (PRODUCT.md §6). A refund comes off the goods first (houses
  * returned or never sent), then off the gift; what remains is what the receipt states.
  */
-export function receiptForOrder(order: OrderRow): Receipt & { refundedCents: number } {
+export function receiptForOrder(
+  order: OrderRow,
+  lines: readonly { name: string; quantity: number; unitPriceCents: number }[] = [],
+): Receipt & { refundedCents: number } {
   const goods = order.subtotalCents + order.shippingCents;
   const tax = order.taxCents;
   let refund = order.refundedCents;
@@ -34,12 +37,20 @@ export function receiptForOrder(order: OrderRow): Receipt & { refundedCents: num
       deductibleCents: 0,
       disclosureRequired: false,
       acknowledgmentRequired: false,
+      goods: [],
       statements: ["This payment was refunded in full; nothing remains paid or deductible."],
       refundedCents: order.refundedCents,
     };
   }
   return {
-    ...receiptFor({ amountPaidCents: paid, goodsValueCents: goodsLeft, salesTaxCents: taxLeft, giftCents: giftLeft }),
+    ...receiptFor({
+      amountPaidCents: paid,
+      goodsValueCents: goodsLeft,
+      salesTaxCents: taxLeft,
+      giftCents: giftLeft,
+      // After a refund the houses kept are not known line by line: the estimate above stands alone.
+      goods: order.refundedCents === 0 ? goodsOfOrder({ lines, shippingCents: order.shippingCents }) : [],
+    }),
     refundedCents: order.refundedCents,
   };
 }
@@ -47,8 +58,12 @@ export function receiptForOrder(order: OrderRow): Receipt & { refundedCents: num
 export async function getOrderReceipt(order: OrderRow): Promise<OrderReceipt> {
   const db = await getDb();
   const [org] = await db.select().from(organization).where(eq(organization.id, 1));
+  const lines = await db
+    .select({ name: orderLines.name, quantity: orderLines.quantity, unitPriceCents: orderLines.unitPriceCents })
+    .from(orderLines)
+    .where(eq(orderLines.orderId, order.id));
   return {
-    ...receiptForOrder(order),
+    ...receiptForOrder(order, lines),
     organization: org
       ? { legalName: org.legalName, street: org.street, city: org.city, state: org.state, zip: org.zip, taxId: org.taxId }
       : null,

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, count, eq, gt, isNull } from "drizzle-orm";
+import { and, count, eq, gt, isNull, sql } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { passwordResetTokens, users } from "@/db/schema";
 import { hashPassword } from "@/lib/auth/passwords";
@@ -93,7 +93,11 @@ export async function resetPassword({
       )
       .returning({ userId: passwordResetTokens.userId });
     if (!spent) throw new AppError("bad_request", REFUSED, { token: REFUSED });
-    await tx.update(users).set({ passwordHash }).where(eq(users.id, spent.userId));
+    // A reset ends every session signed in with the old password (users.session_version).
+    await tx
+      .update(users)
+      .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })
+      .where(eq(users.id, spent.userId));
     await tx
       .update(passwordResetTokens)
       .set({ usedAt: now })

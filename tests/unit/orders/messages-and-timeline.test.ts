@@ -31,10 +31,12 @@ describe("e-mails on arrival in a state", () => {
       ["install-guide", `install-guide:paid:${order.id}`, "Your install guide for order RW-00042"],
     ]);
     const giftOnly = { ...order, method: "none", giftCents: 2500 };
-    expect(messagesForArrival({ order: giftOnly, to: "paid" }).map((m) => [m.kind, m.subject])).toEqual([
+    // The center's name comes from its settings, never from the code.
+    expect(messagesForArrival({ order: giftOnly, to: "paid", centerName: "Mesa Verde Bat Haven" }).map((m) => [m.kind, m.subject])).toEqual([
       ["order-confirmation", "Thank you for your gift (RW-00042)"],
-      ["gift-receipt", "Your gift receipt from Cedar Hollow Wildlife Rescue (RW-00042)"],
+      ["gift-receipt", "Your gift receipt from Mesa Verde Bat Haven (RW-00042)"],
     ]);
+    expect(messagesForArrival({ order: giftOnly, to: "paid" }).map((m) => m.subject)[1]).toBe("Your gift receipt (RW-00042)");
   });
 
   it("mails only on a step forward: a correction back to a state sends nothing", () => {

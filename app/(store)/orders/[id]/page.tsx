@@ -6,6 +6,7 @@ import { PageHeader, PageShell } from "@/components/page-header";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
+import { getOrganization } from "@/lib/admin/settings";
 import { getSessionUser } from "@/lib/auth/session";
 import { getOrderForViewer } from "@/lib/checkout/queries/order-access";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
@@ -120,7 +121,7 @@ export default async function OrderPage({ params, searchParams }: Props) {
               <ShipTo address={order.shipTo as Record<string, string>} />
             </div>
           ) : order.method === "pickup" ? (
-            <p>Pickup at Cedar Hollow Wildlife Rescue, Larkspur Falls. We e-mail you when it is ready.</p>
+            <PickupLine />
           ) : null}
         </aside>
       </div>
@@ -144,4 +145,11 @@ function ShipTo({ address }: { address: Record<string, string> }) {
       {address.city}, {address.state} {address.zip}
     </address>
   );
+}
+
+// The center's name and town as its settings give them (admin, Settings).
+async function PickupLine() {
+  const org = await getOrganization();
+  const where = org ? `${org.displayName}, ${org.city}` : "the center";
+  return <p>Pickup at {where}. We e-mail you when it is ready.</p>;
 }

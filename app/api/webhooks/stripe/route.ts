@@ -1,12 +1,13 @@
 import { NextResponse } from "next/server";
 import { verifyWebhook } from "@/lib/checkout/payments";
 import { processPaymentEvent, RetryLater } from "@/lib/checkout/commands/webhooks";
+import { gated } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";
 
 // Public, but only genuine deliveries count: the signature is checked on the raw body, and an
 // unsigned, tampered or older-than-300-s delivery is refused with 400 and no write.
-export async function POST(request: Request) {
+export const POST = gated(async (request: Request) => {
   const raw = await request.text();
   let event;
   try {
@@ -29,4 +30,4 @@ export async function POST(request: Request) {
     console.error("webhook processing failed", error);
     return NextResponse.json({ error: { code: "internal", message: "Processing failed; it will be retried." } }, { status: 500 });
   }
-}
+});

@@ -2,11 +2,12 @@ import { houseDrawingSvg } from "@/lib/catalog/drawing";
 import { getHouseBySlug } from "@/lib/catalog/queries";
 import { getSessionUser } from "@/lib/auth/session";
 import { can } from "@/lib/auth/roles";
+import { gated } from "@/lib/http/route";
 
 export const dynamic = "force-dynamic";
 
 // The generated drawing of a model; drafts only for staff.
-export async function GET(_request: Request, { params }: { params: Promise<{ slug: string }> }) {
+export const GET = gated(async (_request: Request, { params }: { params: Promise<{ slug: string }> }) => {
   const { slug } = await params;
   const user = await getSessionUser();
   const house = await getHouseBySlug({ slug, includeUnpublished: Boolean(user && can(user.role, "staff:models")) });
@@ -19,4 +20,4 @@ export async function GET(_request: Request, { params }: { params: Promise<{ slu
       "content-security-policy": "default-src 'none'; style-src 'unsafe-inline'",
     },
   });
-}
+});

@@ -1,5 +1,6 @@
 import { getSessionUser } from "@/lib/auth/session";
 import { AppError, badInput } from "@/lib/http/errors";
+import { gateValue } from "@/lib/http/input-gate";
 import { route } from "@/lib/http/route";
 import { reportFromOrderPage } from "@/lib/roost-reports/order-reports";
 import { houseReportSchema } from "@/lib/roost-reports/report-input";
@@ -27,6 +28,7 @@ export const POST = route<{ id: string }>({ public: true }, async ({ request, pa
   } catch {
     throw new AppError("bad_request", "The report could not be read as a form. Please try again.");
   }
+  gateValue(form);
   const text = (name: string) => {
     const value = form.get(name);
     return typeof value === "string" ? value : undefined;

@@ -1,4 +1,5 @@
 import { AppError, badInput } from "@/lib/http/errors";
+import { gateValue } from "@/lib/http/input-gate";
 import { route } from "@/lib/http/route";
 import { getStaffModelBySlug, listModelPhotos } from "@/lib/staff/queries/model";
 import { photoUploadFieldsSchema } from "@/lib/staff/photo-input";
@@ -44,6 +45,7 @@ export const POST = route<{ slug: string }>(
         "The upload could not be read as a form. Please try again.",
       );
     }
+    gateValue(form);
     const file = form.get("file");
     if (!(file instanceof Blob))
       throw new AppError("bad_request", "Choose a photo to add.", {
