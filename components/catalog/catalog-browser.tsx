@@ -3,6 +3,7 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
 import { Alert } from "@/components/ui/alert";
+import { getButtonClasses } from "@/components/ui/button";
 import { Checkbox } from "@/components/ui/checkbox";
 import { EmptyState } from "@/components/ui/empty-state";
 import { Select } from "@/components/ui/select";
@@ -22,6 +23,11 @@ async function fetchHouses(query: CatalogQuery): Promise<Result> {
 
 const PRICE_LIMITS = [10000, 15000, 20000, 30000];
 
+/** How many filters are set (the band counts: it narrows what "suits" means). */
+export function activeFilterCount(query: CatalogQuery): number {
+  return [query.band, query.chambers, query.mount, query.maxPriceCents, query.inStock].filter((v) => v !== undefined && v !== false).length;
+}
+
 /** The catalog's filters and results; the first page arrives rendered by the server. */
 export function CatalogBrowser({ initialQuery, initialResult }: { initialQuery: CatalogQuery; initialResult: Result }) {
   const [query, setQuery] = useState<CatalogQuery>(initialQuery);
@@ -40,10 +46,36 @@ export function CatalogBrowser({ initialQuery, initialResult }: { initialQuery: 
   }, [query]);
 
   const update = (patch: Partial<CatalogQuery>) => setQuery((q) => ({ ...q, ...patch }));
+  // On a phone the filters fold behind a button so the first houses show on the first screen;
+  // from the lg breakpoint up they stand beside the results and the button is hidden.
+  const [filtersOpen, setFiltersOpen] = useState(false);
+  const active = activeFilterCount(query);
 
   return (
-    <div className="grid gap-8 lg:grid-cols-[16rem_1fr]">
-      <form className="flex flex-col gap-5 rounded-xl border border-paper-200 bg-white p-5 lg:self-start" aria-label="Filter houses" onSubmit={(e) => e.preventDefault()}>
+    <div className="grid gap-4 lg:grid-cols-[16rem_1fr] lg:gap-8">
+      <div className="lg:hidden">
+        <button
+          type="button"
+          aria-expanded={filtersOpen}
+          aria-controls="catalog-filters"
+          onClick={() => setFiltersOpen((open) => !open)}
+          className={getButtonClasses({ variant: "secondary" })}
+        >
+          {filtersOpen ? "Hide filters" : "Filters"}
+          {active > 0 ? (
+            <span className="rounded-full bg-moss-800 px-2 text-sm text-white" data-testid="active-filter-count">
+              {active}
+              <span className="sr-only"> {active === 1 ? "filter" : "filters"} on</span>
+            </span>
+          ) : null}
+        </button>
+      </div>
+      <form
+        id="catalog-filters"
+        className={`${filtersOpen ? "flex" : "hidden"} flex-col gap-5 rounded-xl border border-paper-200 bg-white p-5 lg:flex lg:self-start`}
+        aria-label="Filter houses"
+        onSubmit={(e) => e.preventDefault()}
+      >
         <div className="flex flex-col gap-1.5">
           <label htmlFor="filter-band" className="font-bold">
             Your summers

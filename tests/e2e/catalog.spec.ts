@@ -61,3 +61,33 @@ test("the home page offers the band finder and the catalog", async ({ page }) =>
   await page.getByRole("link", { name: "Browse the houses" }).first().click();
   await expect(page.getByRole("heading", { level: 1, name: "Bat houses" })).toBeVisible();
 });
+
+test("on a phone the filters fold behind a button with the count of active filters, and the first house shows on the first screen", async ({ page }) => {
+  await page.setViewportSize({ width: 390, height: 844 });
+  await page.goto("/houses?band=hot&chambers=4");
+  const toggle = page.getByRole("button", { name: /^Filters/ });
+  await expect(toggle).toHaveAttribute("aria-expanded", "false");
+  await expect(page.getByTestId("active-filter-count")).toHaveText("2 filters on");
+  await expect(page.getByRole("form", { name: "Filter houses" })).toBeHidden();
+  const firstCard = page.getByTestId("house-card").first();
+  await expect(firstCard).toBeVisible();
+  const box = await firstCard.boundingBox();
+  expect(box && box.y < 844).toBe(true);
+  await expectAccessible(page);
+
+  // By keyboard: the button opens the filters, a change shows in the count.
+  await toggle.focus();
+  await page.keyboard.press("Enter");
+  await expect(page.getByRole("button", { name: /^Hide filters/ })).toHaveAttribute("aria-expanded", "true");
+  await expect(page.getByRole("form", { name: "Filter houses" })).toBeVisible();
+  await page.getByLabel("In stock only").check();
+  await expect(page.getByTestId("active-filter-count")).toHaveText("3 filters on");
+  await expectAccessible(page);
+  await page.getByRole("button", { name: /^Hide filters/ }).press("Enter");
+  await expect(page.getByRole("form", { name: "Filter houses" })).toBeHidden();
+
+  // On a wide screen the filters always stand beside the results and the button is gone.
+  await page.setViewportSize({ width: 1280, height: 900 });
+  await expect(page.getByRole("form", { name: "Filter houses" })).toBeVisible();
+  await expect(page.getByRole("button", { name: /^Filters/ })).toBeHidden();
+});
