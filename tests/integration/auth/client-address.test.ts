@@ -5,7 +5,8 @@ import { signInAttempts } from "@/db/schema";
 import { seedDemo } from "@/lib/demo/commands";
 import { authenticate, clientAddress } from "@/lib/auth/credentials";
 import { env } from "@/lib/config/env";
-import { MAX_FAILURES_PER_ADDRESS, recordSignInAttempt } from "@/lib/auth/throttle";
+import { recordSignInAttempt } from "@/lib/auth/commands";
+import { MAX_FAILURES_PER_ADDRESS } from "@/lib/auth/throttle";
 import { resetDb } from "../../support/db";
 
 // Sign-in throttling counts failures per address; a client that changes its X-Forwarded-For on
@@ -20,7 +21,7 @@ function useProxies(n: number) {
 // A failed try as authenticate() records it, under the address the headers resolve to (the
 // password check itself is skipped: thirty bcrypt rounds would only slow the suite down).
 async function failFrom(headers: Headers, i: number) {
-  await recordSignInAttempt(await getDb(), { email: `nobody-${i}@example.org`, ip: clientAddress(headers), succeeded: false });
+  await recordSignInAttempt({ email: `nobody-${i}@example.org`, ip: clientAddress(headers), succeeded: false });
 }
 
 describe("the per-address sign-in count", () => {

@@ -3,7 +3,7 @@ import type { JWT } from "next-auth/jwt";
 import { beforeEach, describe, expect, it } from "vitest";
 import { getDb } from "@/db/client";
 import { passwordResetTokens, users } from "@/db/schema";
-import { setUserRole } from "@/lib/accounts/users";
+import { setUserRole } from "@/lib/accounts/commands";
 import { authenticate } from "@/lib/auth/credentials";
 import { authOptions } from "@/lib/auth/options";
 import { seedDemo } from "@/lib/demo/commands";

@@ -6,7 +6,7 @@ import { PageHeader, PageShell } from "@/components/page-header";
 import { Alert } from "@/components/ui/alert";
 import { Badge } from "@/components/ui/badge";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
-import { getOrganization } from "@/lib/admin/settings";
+import { getOrganization } from "@/lib/admin/queries";
 import { getSessionUser } from "@/lib/auth/session";
 import { getOrderForViewer } from "@/lib/checkout/queries/order-access";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
