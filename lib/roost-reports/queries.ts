@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, ne, sql } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { houseModels, roostReports, users } from "@/db/schema";
+import { houseModels, orders, roostReportLinkUses, roostReports, users } from "@/db/schema";
 import { BAND_IDS, CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
 import { houseKeyFor, type CountBand, type RoostAnswer } from "./answers";
 import { loadHouseLines, type HouseLine } from "./house-context";
@@ -312,4 +312,18 @@ export async function getHouseLine({ orderLineId }: { orderLineId: string }): Pr
   const db = await getDb();
   const [line] = await loadHouseLines({ db, orderLineIds: [orderLineId] });
   return line ?? null;
+}
+
+/** Whether an answer link (by its token's random id) has already recorded its answer. */
+export async function isLinkUsed({ nonce }: { nonce: string }): Promise<boolean> {
+  const db = await getDb();
+  const [row] = await db.select({ nonce: roostReportLinkUses.nonce }).from(roostReportLinkUses).where(eq(roostReportLinkUses.nonce, nonce));
+  return Boolean(row);
+}
+
+/** The private order page (path and access token) of the order a verified link is about. */
+export async function getOrderPagePath({ orderId }: { orderId: string }): Promise<string | null> {
+  const db = await getDb();
+  const [row] = await db.select({ token: orders.accessToken }).from(orders).where(eq(orders.id, orderId));
+  return row ? `/orders/${orderId}?t=${encodeURIComponent(row.token)}` : null;
 }
