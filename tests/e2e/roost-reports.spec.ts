@@ -66,6 +66,8 @@ async function confirm(page: Page, link: string, expected: RegExp) {
 }
 
 test("a guest answers from the e-mail without signing in, changes the answer, bad links are refused, staff leave one out, and the figures move", async ({ browser, request }) => {
+  // Three browser contexts and a dozen page visits with axe scans: more than the default minute on a shared machine.
+  test.setTimeout(180_000);
   const message = await questionFor(request, HAZEL);
   const text = message.text ?? "";
   const links = answerLinks(text);
