@@ -524,6 +524,18 @@ export const roostReports = pgTable(
   ],
 );
 
+/**
+ * Answer links from the e-mails are single-use: each signed answer token carries a random id, kept
+ * here (with what it answered) when the link records an answer, in the same transaction.
+ */
+export const roostReportLinkUses = pgTable("roost_report_link_uses", {
+  nonce: text("nonce").primaryKey(),
+  houseKey: text("house_key").notNull(),
+  season: integer("season").notNull(),
+  answer: roostAnswerEnum("answer").notNull(),
+  usedAt: timestamp("used_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+});
+
 /** Addresses that asked for no more end-of-season questions (one click, no sign-in). */
 export const roostAskOptOuts = pgTable("roost_ask_opt_outs", {
   email: text("email").primaryKey(),

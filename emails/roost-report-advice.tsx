@@ -25,10 +25,11 @@ export function RoostReportAdviceEmail({ org, name, houseTitles, advice, planner
       footerNote={
         <>
           You told us your house was still empty.{" "}
+          {/* No punctuation right after a link: in plain text a mail program would take it into the address. */}
           <Link href={stopUrl} style={styles.link}>
             Stop these messages
-          </Link>
-          .
+          </Link>{" "}
+          at any time.
         </>
       }
     >
@@ -41,11 +42,11 @@ export function RoostReportAdviceEmail({ org, name, houseTitles, advice, planner
       <Bullets items={advice} />
       <ActionButton href={plannerUrl}>Check a new spot in the site planner</ActionButton>
       <P>
-        When bats do move in, tell us from{" "}
+        When bats do move in, tell us on{" "}
         <Link href={orderUrl} style={styles.link}>
           your order page
-        </Link>
-        .
+        </Link>{" "}
+        whenever you see them.
       </P>
       <CautionList cautions={cautions} />
       <Soft>Moving a house means a ladder and perhaps a new pole: read the cautions above first.</Soft>

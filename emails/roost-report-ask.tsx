@@ -28,10 +28,11 @@ export function RoostReportAskEmail({ org, name, seasonLabel, houses, orderUrl, 
       footerNote={
         <>
           We ask once after each summer, so the next buyer knows how houses like yours do.{" "}
+          {/* No punctuation right after a link: in plain text a mail program would take it into the address. */}
           <Link href={stopUrl} style={styles.link}>
             Stop these questions
-          </Link>
-          .
+          </Link>{" "}
+          at any time.
         </>
       }
     >
@@ -58,11 +59,10 @@ export function RoostReportAskEmail({ org, name, seasonLabel, houses, orderUrl, 
         </Section>
       ))}
       <P>
-        To add a note or a photo,{" "}
         <Link href={orderUrl} style={styles.link}>
-          open your order page
-        </Link>
-        .
+          Open your order page
+        </Link>{" "}
+        to add a note or a photo.
       </P>
       <CautionList cautions={cautions} />
     </EmailLayout>

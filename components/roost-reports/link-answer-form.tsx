@@ -16,10 +16,14 @@ const DONE_WORDS = {
   unchanged: "That was already your answer; nothing changed.",
 } as const;
 
+type Done =
+  | { ok: true; text: string; others: { answer: RoostAnswer; label: string; href: string }[]; orderPath: string | null }
+  | { ok: false; text: string };
+
 /** The button that records an e-mail link's answer, with an optional count and note. */
 export function LinkAnswerForm({ token, answer }: { token: string; answer: RoostAnswer }) {
   const [busy, setBusy] = useState(false);
-  const [done, setDone] = useState<{ ok: boolean; text: string } | null>(null);
+  const [done, setDone] = useState<Done | null>(null);
 
   async function submit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -31,7 +35,11 @@ export function LinkAnswerForm({ token, answer }: { token: string; answer: Roost
       note: (form.get("note") as string | null) ?? "",
     });
     setBusy(false);
-    setDone(result.ok ? { ok: true, text: DONE_WORDS[result.data.outcome] } : { ok: false, text: result.error.message });
+    setDone(
+      result.ok
+        ? { ok: true, text: DONE_WORDS[result.data.outcome], others: result.data.others, orderPath: result.data.orderPath }
+        : { ok: false, text: result.error.message },
+    );
   }
 
   return (
@@ -51,13 +59,38 @@ export function LinkAnswerForm({ token, answer }: { token: string; answer: Roost
       <Field label="A note" hint="Optional.">
         <Textarea name="note" rows={2} maxLength={MAX_NOTE_CHARS} />
       </Field>
-      <Button type="submit" loading={busy} className="self-start">
-        Record this answer
-      </Button>
+      {done?.ok ? null : (
+        <Button type="submit" loading={busy} className="self-start">
+          Record this answer
+        </Button>
+      )}
       {done ? (
         <Alert tone={done.ok ? "good" : "poor"} live>
           {done.text}
         </Alert>
+      ) : null}
+      {done?.ok ? (
+        <nav aria-labelledby="change-answer" className="flex flex-col gap-2">
+          <h3 id="change-answer" className="font-semibold text-ink">
+            Saw something else? Change your answer
+          </h3>
+          <ul className="flex flex-col gap-1">
+            {done.others.map((other) => (
+              <li key={other.answer}>
+                <a href={other.href} className="text-moss-800 underline underline-offset-2 hover:text-moss-900">
+                  {other.label}
+                </a>
+              </li>
+            ))}
+            {done.orderPath ? (
+              <li>
+                <a href={done.orderPath} className="text-moss-800 underline underline-offset-2 hover:text-moss-900">
+                  Your order page (to add a note or a photo)
+                </a>
+              </li>
+            ) : null}
+          </ul>
+        </nav>
       ) : null}
     </form>
   );

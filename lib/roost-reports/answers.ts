@@ -34,3 +34,11 @@ export function isOccupiedAnswer(answer: RoostAnswer): boolean {
 export function houseKeyFor({ orderLineId, unit }: { orderLineId: string; unit: number }): string {
   return `${orderLineId}:${unit}`;
 }
+
+/** The refusal for an answer link presented a second time (each link records one answer, once). */
+export function usedLinkWords(current: { answer: RoostAnswer; countBand: CountBand | null } | null): string {
+  const stands = current
+    ? ` Your answer stands as “${ANSWER_WORDS[current.answer].label}”${current.countBand ? ` (${COUNT_BAND_WORDS[current.countBand].toLowerCase()})` : ""}.`
+    : "";
+  return `This link has already been used.${stands} To change it, use another answer link from the e-mail, or your order page.`;
+}

@@ -1,12 +1,12 @@
 import "server-only";
 import { and, eq, inArray, ne } from "drizzle-orm";
 import { getDb, type Tx } from "@/db/client";
-import { outbox, roostAskOptOuts, roostReports } from "@/db/schema";
+import { outbox, roostAskOptOuts, roostReportLinkUses, roostReports } from "@/db/schema";
 import { AppError } from "@/lib/http/errors";
 import { enqueueEmail } from "@/lib/mail/commands/outbox";
 import { deleteImages, putImages } from "@/lib/uploads/object-store";
 import { prepareImage } from "@/lib/uploads/prepare-image";
-import { houseKeyFor, type CountBand, type RoostAnswer } from "./answers";
+import { houseKeyFor, usedLinkWords, type CountBand, type RoostAnswer } from "./answers";
 import { loadHouseLines, type HouseLine } from "./queries";
 import { newReportPhotoKeyBase } from "./photo-keys";
 import type { ReviewInput } from "./report-input";
@@ -53,9 +53,10 @@ function isUniqueViolation(error: unknown): boolean {
 }
 
 /**
- * Records one answer about one house for one season. The same answer again changes nothing
- * (a second click of the same link is harmless); a different answer, count, note or photo
- * becomes the current report and the old one stays as history.
+ * Records one answer about one house for one season. The same answer again changes nothing;
+ * a different answer, count, note or photo becomes the current report and the old one stays as
+ * history. An e-mail link's answer (`linkNonce`, its token's random id) is kept as used in the
+ * same transaction: the same link again, even at the same instant, is refused and writes nothing.
  */
 export async function recordHouseReport({
   line,
@@ -67,6 +68,7 @@ export async function recordHouseReport({
   mount,
   photo,
   reporter,
+  linkNonce,
   now = new Date(),
 }: {
   line: HouseLine;
@@ -78,6 +80,7 @@ export async function recordHouseReport({
   mount?: string;
   photo?: { bytes: Uint8Array; fileName: string };
   reporter: Reporter;
+  linkNonce?: string;
   now?: Date;
 }): Promise<{ outcome: ReportOutcome; reportId: string }> {
   if (!Number.isInteger(unit) || unit < 1 || unit > line.quantity) {
@@ -87,11 +90,27 @@ export async function recordHouseReport({
   const summer = checkReportableSeason({ line, season, now });
   const stored = photo ? await storePhoto(photo.bytes, photo.fileName) : null;
   const houseKey = houseKeyFor({ orderLineId: line.orderLineId, unit });
-  const write = async (tx: Tx) => {
-    const [existing] = await tx
+  const currentOf = (tx: Tx) =>
+    tx
       .select()
       .from(roostReports)
       .where(and(eq(roostReports.houseKey, houseKey), eq(roostReports.season, season), eq(roostReports.current, true)));
+  const write = async (tx: Tx) => {
+    if (linkNonce) {
+      // First, so a second request with the same link waits here for the first to commit, then
+      // finds the id taken and stops before touching the reports.
+      const [use] = await tx
+        .insert(roostReportLinkUses)
+        .values({ nonce: linkNonce, houseKey, season, answer, usedAt: now })
+        .onConflictDoNothing()
+        .returning({ nonce: roostReportLinkUses.nonce });
+      if (!use) {
+        const [current] = await currentOf(tx);
+        const message = usedLinkWords(current ?? null);
+        throw new AppError("conflict", message, { token: message });
+      }
+    }
+    const [existing] = await currentOf(tx);
     const same = existing?.answer === answer;
     const nextCount = answer === "bats_seen" ? (countBand ?? (same ? existing?.countBand : null) ?? null) : null;
     const nextNote = note || (same ? (existing?.note ?? "") : "");

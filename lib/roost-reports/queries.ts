@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, inArray, ne, sql, type SQL } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db/client";
-import { houseModels, orderEvents, orderLines, orders, roostAskOptOuts, roostReports, sites, users } from "@/db/schema";
+import { houseModels, orderEvents, orderLines, orders, roostAskOptOuts, roostReportLinkUses, roostReports, sites, users } from "@/db/schema";
 import { BAND_IDS, CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
 import { houseKeyFor, type CountBand, type RoostAnswer } from "./answers";
 import {
@@ -408,4 +408,18 @@ export async function loadHouseLines({
 export async function hasOptedOutOfRoostMail({ db, email }: { db: DbOrTx; email: string }): Promise<boolean> {
   const [optedOut] = await db.select().from(roostAskOptOuts).where(eq(roostAskOptOuts.email, email.toLowerCase()));
   return Boolean(optedOut);
+}
+
+/** Whether an answer link (by its token's random id) has already recorded its answer. */
+export async function isLinkUsed({ nonce }: { nonce: string }): Promise<boolean> {
+  const db = await getDb();
+  const [row] = await db.select({ nonce: roostReportLinkUses.nonce }).from(roostReportLinkUses).where(eq(roostReportLinkUses.nonce, nonce));
+  return Boolean(row);
+}
+
+/** The private order page (path and access token) of the order a verified link is about. */
+export async function getOrderPagePath({ orderId }: { orderId: string }): Promise<string | null> {
+  const db = await getDb();
+  const [row] = await db.select({ token: orders.accessToken }).from(orders).where(eq(orders.id, orderId));
+  return row ? `/orders/${orderId}?t=${encodeURIComponent(row.token)}` : null;
 }

@@ -1,8 +1,8 @@
-import { createHash, createHmac, hkdfSync, timingSafeEqual } from "node:crypto";
+import { createHash, createHmac, hkdfSync, randomBytes, timingSafeEqual } from "node:crypto";
 import { z } from "zod";
 import { ROOST_ANSWERS } from "./answers";
 
-// Signed one-click links for roost reports: no sign-in, nothing stored. A token names exactly
+// Signed one-click links for roost reports: no sign-in, nothing stored when one is made. A token names exactly
 // what it may do (its purpose) and to what: the answer link names the order line, the house
 // (unit), the season and the answer; the opt-out link names the order and its e-mail address.
 // Each purpose signs with its own key, derived from the app secret with HKDF-SHA256 (RFC 5869),
@@ -10,6 +10,10 @@ import { ROOST_ANSWERS } from "./answers";
 // match. The signature is HMAC-SHA256 (RFC 2104) truncated to 128 bits, the shortest truncation
 // NIST SP 800-107 Rev. 1 (2012, §5.3.4) treats as giving 128-bit security against forgery.
 // The life of a link (18 months) covers one season's question and the next: common practice.
+// An answer token also carries a random id (128 bits from the system's CSPRNG, common practice
+// for one-time links): the answer is recorded with that id, once, so the same link cannot be used
+// twice; changing an answer takes another link (each e-mail holds one per answer, and the page
+// after an answer offers freshly signed ones).
 
 export const TOKEN_PURPOSES = ["roost-answer", "roost-opt-out"] as const;
 export type TokenPurpose = (typeof TOKEN_PURPOSES)[number];
@@ -25,11 +29,14 @@ const answerClaims = z.object({
   u: z.number().int().min(1).max(10),
   s: z.number().int().min(2000).max(9999),
   a: z.enum(ROOST_ANSWERS),
+  n: z.string().regex(/^[A-Za-z0-9_-]{22}$/),
   x: z.number().int(),
 });
 const optOutClaims = z.object({ p: z.literal("roost-opt-out"), o: uuid, m: z.string().min(3).max(320), x: z.number().int() });
 
 export type AnswerClaims = { orderLineId: string; unit: number; season: number; answer: (typeof ROOST_ANSWERS)[number] };
+/** The claims of a verified answer token: what it answers, and the id its single use is kept under. */
+export type VerifiedAnswerClaims = AnswerClaims & { nonce: string };
 export type OptOutClaims = { orderId: string; email: string };
 
 function keyFor(secret: string, purpose: TokenPurpose): Buffer {
@@ -91,6 +98,7 @@ export function signAnswerToken({ secret, claims, now }: { secret: string; claim
     u: claims.unit,
     s: claims.season,
     a: claims.answer,
+    n: randomBytes(16).toString("base64url"),
     x: expiry(now),
   });
 }
@@ -103,13 +111,13 @@ export function verifyAnswerToken({
   secret: string;
   token: string;
   now: Date;
-}): { ok: true; claims: AnswerClaims } | { ok: false; reason: TokenRefusal } {
+}): { ok: true; claims: VerifiedAnswerClaims } | { ok: false; reason: TokenRefusal } {
   const opened = open(secret, "roost-answer", token, now);
   if (!opened.ok) return opened;
   const parsed = answerClaims.safeParse(opened.claims);
   if (!parsed.success) return { ok: false, reason: "malformed" };
   const c = parsed.data;
-  return { ok: true, claims: { orderLineId: c.l, unit: c.u, season: c.s, answer: c.a } };
+  return { ok: true, claims: { orderLineId: c.l, unit: c.u, season: c.s, answer: c.a, nonce: c.n } };
 }
 
 export function signOptOutToken({ secret, claims, now }: { secret: string; claims: OptOutClaims; now: Date }): string {

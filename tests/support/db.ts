@@ -4,6 +4,7 @@ import { getDb, type Db } from "@/db/client";
 const TABLES = [
   "roost_reports",
   "roost_ask_opt_outs",
+  "roost_report_link_uses",
   "sign_in_attempts",
   "password_reset_tokens",
   "email_preferences",

@@ -14,7 +14,8 @@ export const metadata: Metadata = {
 };
 
 // Opening the link changes nothing: mail scanners follow links, so the answer is recorded only
-// when the buyer presses the button (a POST). Pressing it twice, or again later, is harmless.
+// when the buyer presses the button (a POST). Each link records its answer once: the same link
+// again is refused; the page after an answer offers fresh links to change it.
 export default async function LinkAnswerPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const { token } = await searchParams;
   const value = typeof token === "string" ? token : "";
@@ -22,8 +23,8 @@ export default async function LinkAnswerPage({ searchParams }: { searchParams: P
   if (!preview.ok) {
     return (
       <PageShell narrow>
-        <PageHeader title="This link cannot record an answer" />
-        <Alert tone="poor" title="Nothing was recorded">
+        <PageHeader title={"used" in preview ? "This link has already been used" : "This link cannot record an answer"} />
+        <Alert tone="poor" title={"used" in preview ? "Nothing new was recorded" : "Nothing was recorded"}>
           {preview.message}
         </Alert>
       </PageShell>
@@ -49,7 +50,7 @@ export default async function LinkAnswerPage({ searchParams }: { searchParams: P
             <LinkAnswerForm token={value} answer={preview.claims.answer} />
           </div>
         </section>
-        <p className="text-sm text-ink-soft">Wrong answer? Use another link in the e-mail: the last one you confirm counts.</p>
+        <p className="text-sm text-ink-soft">Wrong answer? Use another link in the e-mail: the last one you confirm counts. Each link works once.</p>
         <ReportCautions hemisphere={preview.hemisphere} />
       </div>
     </PageShell>

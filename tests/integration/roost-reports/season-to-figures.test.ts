@@ -2,13 +2,13 @@ import { and, eq } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from "vitest";
 import wilsonLower from "wilson-score";
 import { getDb } from "@/db/client";
-import { houseModels, orderEvents, orders, roostReports } from "@/db/schema";
+import { houseModels, orderEvents, orders, roostReportLinkUses, roostReports } from "@/db/schema";
 import { GET as getHouse } from "@/app/api/houses/[slug]/route";
 import { seedDemo } from "@/lib/demo/commands";
 import { deliverPendingMail } from "@/lib/mail/commands/sender";
 import { changeOrderStatus } from "@/lib/orders/commands";
 import { reviewRoostReport } from "@/lib/roost-reports/commands";
-import { answerFromLink } from "@/lib/roost-reports/link-answers";
+import { answerFromLink, previewLinkAnswer } from "@/lib/roost-reports/link-answers";
 import { listReportQuestionsForViewer, reportFromOrderPage } from "@/lib/roost-reports/order-reports";
 import { getModelOccupancy, getOccupancyPicture } from "@/lib/roost-reports/queries";
 import { queueRoostReportMail } from "@/lib/roost-reports/commands";
@@ -161,19 +161,51 @@ describe("a paid order through the season job to the figures", () => {
     expect(at5.firstOccupancy?.medianSummer).toBe(2);
 
     // House 6 answers "no sign yet", then a second click on another link changes it to bats seen;
-    // the same link again changes nothing.
+    // the same link again is refused (each link works once) and writes nothing.
     expect((await answer(links2026, 6, "no_sign", day(2026, 9, 20))).outcome).toBe("recorded");
     const after6 = (await getModelOccupancy({ modelId: id })).overall;
     expect(after6).toMatchObject({ n: 6, k: 2 });
-    expect((await answer(links2026, 6, "bats_seen", day(2026, 9, 21))).outcome).toBe("changed");
-    expect((await answer(links2026, 6, "bats_seen", day(2026, 9, 22))).outcome).toBe("unchanged");
+    const changedTo = await answer(links2026, 6, "bats_seen", day(2026, 9, 21));
+    expect(changedTo.outcome).toBe("changed");
+    const db = await getDb();
+    const rowsBefore = (await db.select().from(roostReports)).length;
+    const usesBefore = (await db.select().from(roostReportLinkUses)).length;
+    await expect(answer(links2026, 6, "bats_seen", day(2026, 9, 22))).rejects.toMatchObject({
+      code: "conflict",
+      status: 409,
+      message: expect.stringMatching(/^This link has already been used\. Your answer stands as “Bats seen”\./),
+    });
+    // The first used link of house 6 too, though its answer is no longer the current one.
+    await expect(answer(links2026, 6, "no_sign", day(2026, 9, 22))).rejects.toMatchObject({ code: "conflict" });
+    expect((await db.select().from(roostReports)).length).toBe(rowsBefore);
+    expect((await db.select().from(roostReportLinkUses)).length).toBe(usesBefore);
+    // Opening a used link says so before any button.
+    expect(await previewLinkAnswer({ token: links2026.get(6)!.bats_seen!, now: day(2026, 9, 22) })).toMatchObject({
+      ok: false,
+      used: true,
+      message: expect.stringMatching(/already been used\. Your answer stands as “Bats seen”/),
+    });
     const changed = (await getModelOccupancy({ modelId: id })).overall;
     expect(changed).toMatchObject({ n: 6, k: 3, rate: 0.5 });
     expect(changed.interval).toEqual(wilsonInterval({ successes: 3, trials: 6 }));
     expect(changed.interval!.lower).toBeGreaterThan(after6.interval!.lower);
-    const db = await getDb();
+
+    // The answer stays changeable: the page after an answer offers fresh links for the other
+    // answers (newly signed, each with its own id) and the private order page.
+    expect(changedTo.others.map((o) => o.answer)).toEqual(["no_sign", "signs", "gone"]);
+    expect(changedTo.orderPath).toMatch(new RegExp(`^/orders/${orderId}\\?t=[A-Za-z0-9_-]+$`));
+    const emailTokens = new Set(Object.values(links2026.get(6)!));
+    const freshSigns = decodeURIComponent(changedTo.others.find((o) => o.answer === "signs")!.href.split("token=")[1]!);
+    expect(emailTokens.has(freshSigns)).toBe(false);
+    const viaFresh = await answerFromLink({ input: { token: freshSigns, note: "" }, now: day(2026, 9, 23) });
+    expect(viaFresh.outcome).toBe("changed");
+    expect((await getModelOccupancy({ modelId: id })).overall).toMatchObject({ n: 6, k: 3 });
+    await expect(answerFromLink({ input: { token: freshSigns, note: "" }, now: day(2026, 9, 23) })).rejects.toMatchObject({
+      code: "conflict",
+      message: expect.stringMatching(/Your answer stands as “Signs of bats”/),
+    });
     const house6 = (await db.select().from(roostReports).where(eq(roostReports.season, 2026))).filter((r) => r.unit === 6);
-    expect(house6.map((r) => [r.answer, r.current]).sort()).toEqual([["bats_seen", true], ["no_sign", false]]);
+    expect(house6.map((r) => [r.answer, r.current]).sort()).toEqual([["bats_seen", false], ["no_sign", false], ["signs", true]]);
     expect(house6.every((r) => r.reporter === "email_link" && r.reporterTokenHash?.length === 64 && r.reporterUserId === null)).toBe(true);
 
     // Staff mark house 1's report doubtful: it leaves the figures (n 5, K 2), with its reason kept.
@@ -196,6 +228,23 @@ describe("a paid order through the season job to the figures", () => {
     expect((await apiOccupancy()).overall).toMatchObject({ n: 5, k: 2 });
     // A link for a season the house has not had yet is refused too (the 2026 links in 2025).
     await expect(answer(links2026, 3, "signs", day(2025, 12, 1))).rejects.toMatchObject({ message: expect.stringMatching(/not one this house has had yet/) });
+  });
+
+  it("records exactly one use when the same link is sent twice at the same instant", async () => {
+    await collectedOrder(1);
+    await queueRoostReportMail({ now: day(2026, 9, 15) });
+    await deliverPendingMail();
+    const links = answerLinks(messagesTo(/summer 2026$/)[0]!);
+    const token = links.get(1)!.signs!;
+    const settled = await Promise.allSettled([0, 1].map(() => answerFromLink({ input: { token, note: "" }, now: day(2026, 9, 18) })));
+    const fulfilled = settled.filter((r) => r.status === "fulfilled");
+    const rejected = settled.filter((r): r is PromiseRejectedResult => r.status === "rejected");
+    expect(fulfilled.map((r) => r.value.outcome)).toEqual(["recorded"]);
+    expect(rejected).toHaveLength(1);
+    expect(rejected[0]!.reason).toMatchObject({ code: "conflict", message: expect.stringMatching(/already been used/) });
+    const db = await getDb();
+    expect(await db.select({ answer: roostReportLinkUses.answer }).from(roostReportLinkUses)).toEqual([{ answer: "signs" }]);
+    expect((await db.select().from(roostReports)).map((r) => r.answer)).toEqual(["signs"]);
   });
 
   it("sends the gentle second-summer advice for houses still empty, linking the placement planner, with the unsubscribe headers", async () => {

@@ -13,9 +13,27 @@ const now = new Date("2026-09-02T10:00:00Z");
 const claims = { orderLineId: "4b1c4f1e-2d5a-4a6b-9f3e-1a2b3c4d5e6f", unit: 2, season: 2026, answer: "signs" as const };
 
 describe("roost report tokens", () => {
-  it("round-trips the house, season and answer", () => {
+  it("round-trips the house, season and answer, with a random id of 128 bits", () => {
     const token = signAnswerToken({ secret, claims, now });
-    expect(verifyAnswerToken({ secret, token, now })).toEqual({ ok: true, claims });
+    const verified = verifyAnswerToken({ secret, token, now });
+    expect(verified).toEqual({ ok: true, claims: { ...claims, nonce: expect.stringMatching(/^[A-Za-z0-9_-]{22}$/) } });
+    expect(Buffer.from(verified.ok ? verified.claims.nonce : "", "base64url")).toHaveLength(16);
+  });
+
+  it("signs the same answer twice as two different links, each with its own id (single use needs that)", () => {
+    const a = signAnswerToken({ secret, claims, now });
+    const b = signAnswerToken({ secret, claims, now });
+    expect(a).not.toBe(b);
+    const [va, vb] = [verifyAnswerToken({ secret, token: a, now }), verifyAnswerToken({ secret, token: b, now })];
+    expect(va.ok && vb.ok && va.claims.nonce !== vb.claims.nonce).toBe(true);
+    // The id is signed: changing it is a forgery.
+    const [v, body, sig] = a.split(".");
+    const changed = JSON.parse(Buffer.from(body!, "base64url").toString());
+    changed.n = "A".repeat(22);
+    expect(verifyAnswerToken({ secret, token: `${v}.${Buffer.from(JSON.stringify(changed)).toString("base64url")}.${sig}`, now })).toEqual({
+      ok: false,
+      reason: "forged",
+    });
   });
 
   it("refuses a token with any field changed, or signed with another secret", () => {
