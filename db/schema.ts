@@ -526,3 +526,27 @@ export type SiteRow = typeof sites.$inferSelect;
 export type InspectionRow = typeof inspections.$inferSelect;
 export type StockMovementRow = typeof stockMovements.$inferSelect;
 export type RoostReportRow = typeof roostReports.$inferSelect;
+
+/**
+ * The center's giving and planning settings; one row, id = 1 (kept apart from `organization`,
+ * the details printed on receipts). Dates and years of gifts are read in `timeZone` (PRODUCT.md §6).
+ */
+export const givingSettings = pgTable(
+  "giving_settings",
+  {
+    id: integer("id").primaryKey().default(1),
+    /** IANA zone name of the center's own calendar. The demo center is in Oregon. */
+    timeZone: text("time_zone").notNull().default("America/Los_Angeles"),
+    /** The card fee a donor may choose to cover: a percentage (basis points) plus a fixed part. */
+    feeBasisPoints: integer("fee_basis_points").notNull().default(290),
+    feeFixedCents: integer("fee_fixed_cents").notNull().default(30),
+    /** Weeks the workshop needs to build and certify a batch of houses (the build plan). */
+    leadTimeWeeks: integer("lead_time_weeks").notNull().default(6),
+    ...timestamps,
+  },
+  (t) => [
+    check("giving_settings_single_row", sql`${t.id} = 1`),
+    check("giving_settings_fee", sql`${t.feeBasisPoints} between 0 and 1000 and ${t.feeFixedCents} between 0 and 500`),
+    check("giving_settings_lead", sql`${t.leadTimeWeeks} between 0 and 52`),
+  ],
+);

@@ -16,6 +16,7 @@ import { ReadyForPickupEmail } from "@/emails/ready-for-pickup";
 import { RefundEmail } from "@/emails/refund";
 import { ShippedEmail } from "@/emails/shipped";
 import type { Composition } from "./composition";
+import { getCenterTimeZone } from "@/lib/giving/queries";
 import { formatAddress, formatMailDate } from "./format";
 import { findGiftForOrder, loadOrderForMail, type OrderForMail } from "./queries/order-for-mail";
 import { receiptForOrder } from "./order-receipt";
@@ -65,12 +66,13 @@ function confirmation(data: OrderForMail): Composition {
 async function giftReceipt(db: DbOrTx, data: OrderForMail): Promise<Composition> {
   const gift = await findGiftForOrder({ db, orderId: data.order.id });
   if (!gift) throw new PermanentMailError(`Order ${data.number} has no recorded gift.`);
+  const timeZone = await getCenterTimeZone(db);
   return {
     element: createElement(GiftReceiptEmail, {
       org: data.org,
       donorName: data.order.name,
       orderNumber: data.number,
-      date: formatMailDate(gift.receivedAt),
+      date: formatMailDate(gift.receivedAt, timeZone),
       amountPaidCents: data.order.totalCents,
       giftCents: gift.amountCents,
       receipt: receiptForOrder(data.order),

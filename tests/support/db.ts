@@ -2,6 +2,7 @@ import { sql } from "drizzle-orm";
 import { getDb, type Db } from "@/db/client";
 
 const TABLES = [
+  "giving_settings",
   "roost_reports",
   "roost_ask_opt_outs",
   "sign_in_attempts",

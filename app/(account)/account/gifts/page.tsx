@@ -11,12 +11,14 @@ import { formatUsd } from "@/lib/checkout/money";
 import { yearEndStatement } from "@/lib/checkout/receipts";
 import { listGiftsForUser } from "@/lib/mail/queries/donor-gifts";
 import { formatMailDate } from "@/lib/mail/format";
+import { centerYear } from "@/lib/giving/center-time";
+import { getCenterTimeZone } from "@/lib/giving/queries";
 
 export const metadata: Metadata = { title: "Your gifts" };
 
 function pickYear(raw: string | string[] | undefined, years: number[]): number {
   const asked = typeof raw === "string" && /^\d{4}$/.test(raw) ? Number(raw) : NaN;
-  return years.includes(asked) ? asked : (years[0] ?? new Date().getUTCFullYear());
+  return years.includes(asked) ? asked : (years[0] ?? asked);
 }
 
 export default async function GiftsPage({
@@ -25,15 +27,16 @@ export default async function GiftsPage({
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
   const user = await requirePageUser("account", "/account/gifts");
-  const gifts = await listGiftsForUser({ userId: user.id });
-  const thisYear = new Date().getUTCFullYear();
-  const years = [...new Set([thisYear, ...gifts.map((g) => g.date.getUTCFullYear())])].sort(
+  const [gifts, timeZone] = await Promise.all([listGiftsForUser({ userId: user.id }), getCenterTimeZone()]);
+  const thisYear = centerYear(new Date(), timeZone);
+  const years = [...new Set([thisYear, ...gifts.map((g) => centerYear(g.date, timeZone))])].sort(
     (a, b) => b - a,
   );
   const year = pickYear((await searchParams).year, years);
   const statement = yearEndStatement({
     gifts: gifts.map((g) => ({ date: g.date, amountCents: g.amountCents, orderId: g.orderId })),
     year,
+    timeZone,
   });
   const numbers = new Map(gifts.map((g) => [g.orderId, g.orderNumber]));
 
@@ -62,7 +65,7 @@ export default async function GiftsPage({
             <TBody>
               {gifts.map((gift) => (
                 <Tr key={gift.orderId}>
-                  <Td>{formatMailDate(gift.date)}</Td>
+                  <Td>{formatMailDate(gift.date, timeZone)}</Td>
                   <Td>{gift.orderNumber}</Td>
                   <Td numeric>{formatUsd(gift.amountCents)}</Td>
                 </Tr>
@@ -96,7 +99,7 @@ export default async function GiftsPage({
               <ul className="flex flex-col gap-1 text-ink-soft">
                 {statement.gifts.map((gift) => (
                   <li key={gift.orderId}>
-                    {formatMailDate(gift.date)} · {numbers.get(gift.orderId)} ·{" "}
+                    {formatMailDate(gift.date, timeZone)} · {numbers.get(gift.orderId)} ·{" "}
                     {formatUsd(gift.amountCents)}
                   </li>
                 ))}
@@ -106,7 +109,7 @@ export default async function GiftsPage({
               <p key={line}>{line}</p>
             ))}
             <p className="text-sm text-ink-soft">
-              Dates are read in UTC, as on each gift&apos;s receipt.
+              Dates and years are the center&apos;s own ({timeZone}), as on each gift&apos;s receipt.
             </p>
             {statement.count > 0 ? <YearEndButton year={year} email={user.email} /> : null}
           </Card>

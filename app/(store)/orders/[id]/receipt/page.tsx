@@ -10,11 +10,11 @@ import { getOrderReceipt } from "@/lib/checkout/queries/receipt";
 import { formatUsd } from "@/lib/checkout/money";
 import { OrderLineList } from "@/components/orders/order-line-list";
 import { AppError } from "@/lib/http/errors";
+import { formatCenterDate } from "@/lib/giving/center-time";
 
 export const metadata: Metadata = { title: "Receipt" };
 
 type Props = { params: Promise<{ id: string }>; searchParams: Promise<{ t?: string }> };
-const day = new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" });
 const TITLES = {
   gift: "Gift receipt",
   mixed: "Receipt for your purchase and gift",
@@ -60,7 +60,7 @@ export default async function ReceiptPage({ params, searchParams }: Props) {
           ) : null}
           <h1 className="mt-4 font-display text-3xl font-semibold text-moss-900">{TITLES[receipt.kind]}</h1>
           <p>
-            {formatOrderNumber(order.number)} · {order.name} · {receipt.date ? day.format(new Date(receipt.date)) : ""}
+            {formatOrderNumber(order.number)} · {order.name} · {receipt.date ? formatCenterDate(new Date(receipt.date), receipt.timeZone) : ""}
           </p>
         </header>
         <OrderLineList lines={lines} className="mt-4" />
