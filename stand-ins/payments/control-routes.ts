@@ -107,6 +107,12 @@ export async function handleControlRequest({
       state.customers,
       state.paymentMethods,
       state.cardNumbers,
+      state.products,
+      state.prices,
+      state.subscriptions,
+      state.invoices,
+      state.invoiceOfIntent,
+      state.testClocks,
     ].forEach((map) => map.clear());
     state.events.length = 0;
     dispatcher.clearAttempts();
