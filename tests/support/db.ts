@@ -3,6 +3,8 @@ import { getDb, type Db } from "@/db/client";
 
 const TABLES = [
   "giving_settings",
+  "gift_dedications",
+  "monthly_gifts",
   "roost_reports",
   "roost_ask_opt_outs",
   "sign_in_attempts",

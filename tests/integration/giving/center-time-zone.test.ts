@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it } from "vitest";
 import { orders } from "@/db/schema";
 import { getOrderReceipt } from "@/lib/checkout/queries/receipt";
-import { saveGivingSettings } from "@/lib/giving/commands";
+import { saveGivingSettings } from "@/lib/giving/commands/settings";
 import { formatCenterDate } from "@/lib/giving/center-time";
 import { getCenterTimeZone, getGivingSettings } from "@/lib/giving/queries";
 import { resetDb } from "../../support/db";

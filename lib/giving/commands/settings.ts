@@ -1,7 +1,7 @@
 import "server-only";
 import { getDb } from "@/db/client";
 import { givingSettings } from "@/db/schema";
-import type { GivingSettings } from "./settings-schema";
+import type { GivingSettings } from "../settings-schema";
 
 export async function saveGivingSettings(input: GivingSettings): Promise<void> {
   const db = await getDb();
