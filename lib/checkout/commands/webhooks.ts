@@ -4,6 +4,7 @@ import type Stripe from "stripe";
 import type { Tx } from "@/db/client";
 import { gifts, orderLines, orders, webhookEvents, type OrderRow } from "@/db/schema";
 import { onInvoicePaid, onInvoicePaymentFailed, onSubscriptionDeleted } from "@/lib/giving/commands/invoice-events";
+import { queueTributeNotice } from "@/lib/giving/commands/once";
 import { isMonthlyGiftCustomer } from "@/lib/giving/queries";
 import { AppError } from "@/lib/http/errors";
 import { withOutbox } from "@/lib/mail/commands/outbox";
@@ -130,6 +131,7 @@ async function onSucceeded(tx: Tx, intent: Stripe.PaymentIntent): Promise<Effect
       .insert(gifts)
       .values({ orderId: order.id, userId: order.userId, email: order.email, amountCents: order.giftCents, receivedAt: paidAt })
       .onConflictDoNothing();
+    await queueTributeNotice(tx, order);
   }
   return { outcome: "paid", refundIds: [] };
 }
