@@ -1,7 +1,7 @@
 import "server-only";
 import { asc, desc, eq } from "drizzle-orm";
 import { getDb, type DbOrTx } from "@/db/client";
-import { giftDedications, gifts, givingSettings, monthlyGifts, type GiftDedicationRow, type MonthlyGiftRow } from "@/db/schema";
+import { giftDedications, gifts, givingSettings, monthlyGifts, orders, type GiftDedicationRow, type MonthlyGiftRow } from "@/db/schema";
 import { DEFAULT_CENTER_TIME_ZONE } from "./center-time";
 import type { GivingSettings } from "./settings-schema";
 
@@ -67,11 +67,12 @@ export async function findDedicationForOrder(orderId: string, tx?: DbOrTx): Prom
 }
 
 /** The gifts one monthly gift has recorded, one per paid invoice, oldest first. */
-export async function listMonthlyGiftPayments(monthlyGiftId: string): Promise<{ orderId: string; invoiceId: string | null; amountCents: number; receivedAt: Date }[]> {
+export async function listMonthlyGiftPayments(monthlyGiftId: string): Promise<{ orderId: string; accessToken: string; invoiceId: string | null; amountCents: number; receivedAt: Date }[]> {
   const db = await getDb();
   return db
-    .select({ orderId: gifts.orderId, invoiceId: gifts.invoiceId, amountCents: gifts.amountCents, receivedAt: gifts.receivedAt })
+    .select({ orderId: gifts.orderId, accessToken: orders.accessToken, invoiceId: gifts.invoiceId, amountCents: gifts.amountCents, receivedAt: gifts.receivedAt })
     .from(gifts)
+    .innerJoin(orders, eq(orders.id, gifts.orderId))
     .where(eq(gifts.monthlyGiftId, monthlyGiftId))
     .orderBy(asc(gifts.receivedAt));
 }

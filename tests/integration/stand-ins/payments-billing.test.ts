@@ -147,3 +147,19 @@ describe("payments stand-in: monthly billing", () => {
     }
   });
 });
+
+describe("payments stand-in: test clock controls", () => {
+  it("lists the clocks and advances one by days without an API key, billing the renewal", async () => {
+    const { stripe, standIn } = await setUp();
+    const clock = await stripe.testHelpers.testClocks.create({ frozen_time: JAN_15, name: "monthly gift x" });
+    const { subscription } = await monthlyOn(stripe, { clock: clock.id });
+    await stripe.paymentIntents.confirm(intentOf(subscription.latest_invoice as Stripe.Invoice), { payment_method: "pm_card_visa" });
+    const listed = (await (await fetch(`${standIn.url}/_stand-in/test-clocks`)).json()) as { data: { id: string; name: string }[] };
+    expect(listed.data.map((c) => c.name)).toEqual(["monthly gift x"]);
+    const res = await fetch(`${standIn.url}/_stand-in/test-clocks/${clock.id}/advance`, { method: "POST", body: JSON.stringify({ days: 32 }) });
+    expect(res.status).toBe(200);
+    expect((await stripe.invoices.list({ subscription: subscription.id })).data).toHaveLength(2);
+    const back = await fetch(`${standIn.url}/_stand-in/test-clocks/${clock.id}/advance`, { method: "POST", body: JSON.stringify({ days: -1 }) });
+    expect(back.status).toBe(400);
+  });
+});

@@ -12,7 +12,7 @@ import { yearEndStatement } from "@/lib/checkout/receipts";
 import { listGiftsForUser } from "@/lib/mail/queries/donor-gifts";
 import { formatMailDate } from "@/lib/mail/format";
 import { centerYear } from "@/lib/giving/center-time";
-import { getCenterTimeZone } from "@/lib/giving/queries";
+import { getCenterTimeZone, listMonthlyGiftsForUser } from "@/lib/giving/queries";
 
 export const metadata: Metadata = { title: "Your gifts" };
 
@@ -27,7 +27,7 @@ export default async function GiftsPage({
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
   const user = await requirePageUser("account", "/account/gifts");
-  const [gifts, timeZone] = await Promise.all([listGiftsForUser({ userId: user.id }), getCenterTimeZone()]);
+  const [gifts, timeZone, monthly] = await Promise.all([listGiftsForUser({ userId: user.id }), getCenterTimeZone(), listMonthlyGiftsForUser(user.id)]);
   const thisYear = centerYear(new Date(), timeZone);
   const years = [...new Set([thisYear, ...gifts.map((g) => centerYear(g.date, timeZone))])].sort(
     (a, b) => b - a,
@@ -46,6 +46,23 @@ export default async function GiftsPage({
         title="Your gifts"
         lead="Every conservation gift you made while signed in, and a statement for any year for your tax records."
       />
+      {monthly.length > 0 ? (
+        <Card as="section" aria-labelledby="monthly-heading" className="mb-8 flex flex-col gap-2">
+          <h2 id="monthly-heading" className="font-display text-2xl font-semibold text-moss-900">
+            Your monthly gifts
+          </h2>
+          <ul className="flex flex-col gap-1">
+            {monthly.map((m) => (
+              <li key={m.id}>
+                {formatUsd(m.amountCents)} a month · {m.status === "stopped" ? "stopped" : m.status === "past_due" ? "payment did not go through" : m.status === "pending" ? "waiting for the first payment" : "active"} ·{" "}
+                <Link className="underline" href={`/give/monthly/${m.id}`}>
+                  {m.status === "stopped" ? "see it" : "change or stop it"}
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </Card>
+      ) : null}
       {gifts.length === 0 ? (
         <EmptyState
           title="No gifts yet"
