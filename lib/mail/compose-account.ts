@@ -79,6 +79,7 @@ async function yearEnd(db: DbOrTx, payload: unknown): Promise<Composition> {
       })),
       totalCents: statement.totalCents,
       statements: statement.statements,
+      timeZone,
     }),
   };
 }
