@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { buildPlan } from "@/lib/reports/build-plan";
+import { buildPlan, type BuildPlanInput } from "@/lib/reports/build-plan";
 
 // Hand-computed: in October 2026 the horizon is Oct 2026 – May 2027, so the basis is last
 // year's Oct 2025 – May 2026. Hollow Four sold 2 + 1 + 4 + 6 = 13 units in those months (the
 // July sale is outside), has 5 in stock: build 8. Twin Ridge sold 3, has 10: build 0.
-const models = [
+const models: BuildPlanInput["models"] = [
   { slug: "hollow-four", name: "Hollow Four", stock: 5, sales: { "2025-10": 2, "2025-12": 1, "2026-03": 4, "2026-04": 6, "2026-07": 9 } },
   { slug: "twin-ridge", name: "Twin Ridge", stock: 10, sales: { "2026-04": 3 } },
 ];
