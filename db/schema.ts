@@ -396,6 +396,9 @@ export const gifts = pgTable(
     email: text("email").notNull(),
     amountCents: integer("amount_cents").notNull(),
     receivedAt: timestamp("received_at", { withTimezone: true, mode: "date" }).notNull(),
+    /** For a monthly gift's payment: the paid invoice (one gift per invoice) and the monthly gift. */
+    invoiceId: text("invoice_id").unique(),
+    monthlyGiftId: uuid("monthly_gift_id"),
   },
   (t) => [index("gifts_user_idx").on(t.userId, t.receivedAt), index("gifts_email_idx").on(t.email)],
 );
@@ -555,3 +558,86 @@ export type SiteRow = typeof sites.$inferSelect;
 export type InspectionRow = typeof inspections.$inferSelect;
 export type StockMovementRow = typeof stockMovements.$inferSelect;
 export type RoostReportRow = typeof roostReports.$inferSelect;
+
+/**
+ * The center's giving and planning settings; one row, id = 1 (kept apart from `organization`,
+ * the details printed on receipts). Dates and years of gifts are read in `timeZone` (PRODUCT.md §6).
+ */
+export const givingSettings = pgTable(
+  "giving_settings",
+  {
+    id: integer("id").primaryKey().default(1),
+    /** IANA zone name of the center's own calendar. The demo center is in Oregon. */
+    timeZone: text("time_zone").notNull().default("America/Los_Angeles"),
+    /** The card fee a donor may choose to cover: a percentage (basis points) plus a fixed part. */
+    feeBasisPoints: integer("fee_basis_points").notNull().default(290),
+    feeFixedCents: integer("fee_fixed_cents").notNull().default(30),
+    /** Weeks the workshop needs to build and certify a batch of houses (the build plan). */
+    leadTimeWeeks: integer("lead_time_weeks").notNull().default(6),
+    ...timestamps,
+  },
+  (t) => [
+    check("giving_settings_single_row", sql`${t.id} = 1`),
+    check("giving_settings_fee", sql`${t.feeBasisPoints} between 0 and 1000 and ${t.feeFixedCents} between 0 and 500`),
+    check("giving_settings_lead", sql`${t.leadTimeWeeks} between 0 and 52`),
+  ],
+);
+
+export const monthlyGiftStatusEnum = pgEnum("monthly_gift_status", ["pending", "active", "past_due", "stopped"]);
+
+/**
+ * A donor's monthly gift: a subscription at the payment service. Each paid invoice becomes its
+ * own order and gift (PRODUCT.md §6: each payment is its own contribution). `pending` until the
+ * first payment; `past_due` after a failed renewal; `stopped` once the subscription has ended.
+ */
+export const monthlyGifts = pgTable(
+  "monthly_gifts",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id").references(() => users.id),
+    email: text("email").notNull(),
+    name: text("name").notNull(),
+    amountCents: integer("amount_cents").notNull(),
+    customerId: text("customer_id").notNull(),
+    subscriptionId: text("subscription_id").notNull(),
+    status: monthlyGiftStatusEnum("status").notNull().default("pending"),
+    stoppedAt: timestamp("stopped_at", { withTimezone: true, mode: "date" }),
+    ...timestamps,
+  },
+  (t) => [
+    uniqueIndex("monthly_gifts_subscription_key").on(t.subscriptionId),
+    index("monthly_gifts_user_idx").on(t.userId),
+    index("monthly_gifts_customer_idx").on(t.customerId),
+    check("monthly_gifts_amount", sql`${t.amountCents} between 100 and 1000000`),
+  ],
+);
+
+/**
+ * What a donor added to a gift beyond its amount: in honour or in memory of someone (with an
+ * optional notice to a person they name, stating the amount only if they chose so), and the card
+ * fee they chose to cover (part of the gift). One row per order (one-time) or per monthly gift.
+ */
+export const giftDedications = pgTable(
+  "gift_dedications",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    orderId: uuid("order_id").references(() => orders.id, { onDelete: "cascade" }),
+    monthlyGiftId: uuid("monthly_gift_id").references(() => monthlyGifts.id, { onDelete: "cascade" }),
+    tributeKind: text("tribute_kind"),
+    tributeName: text("tribute_name"),
+    noticeName: text("notice_name"),
+    noticeEmail: text("notice_email"),
+    noticeShowsAmount: boolean("notice_shows_amount").notNull().default(false),
+    feeCoveredCents: integer("fee_covered_cents").notNull().default(0),
+    createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex("gift_dedications_order_key").on(t.orderId),
+    uniqueIndex("gift_dedications_monthly_key").on(t.monthlyGiftId),
+    check("gift_dedications_kind", sql`${t.tributeKind} is null or ${t.tributeKind} in ('honor', 'memory')`),
+    check("gift_dedications_fee", sql`${t.feeCoveredCents} >= 0`),
+  ],
+);
+
+export type MonthlyGiftRow = typeof monthlyGifts.$inferSelect;
+export type GiftDedicationRow = typeof giftDedications.$inferSelect;

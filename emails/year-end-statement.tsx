@@ -11,6 +11,8 @@ export type YearEndStatementProps = {
   gifts: { date: string; orderNumber: string; amountCents: number }[];
   totalCents: number;
   statements: string[];
+  /** The center's time zone, whose calendar dates the gifts. */
+  timeZone?: string;
 };
 
 export function YearEndStatementEmail({
@@ -21,6 +23,7 @@ export function YearEndStatementEmail({
   gifts,
   totalCents,
   statements,
+  timeZone = "UTC",
 }: YearEndStatementProps) {
   return (
     <EmailLayout org={org} preview={`Your gifts in ${year}: ${formatUsd(totalCents)} in all.`}>
@@ -48,7 +51,7 @@ export function YearEndStatementEmail({
         ))}
       </Note>
       <Soft>
-        Dates are read in Coordinated Universal Time (UTC), as on each gift&apos;s own receipt.
+        Dates and the year are the center&apos;s own calendar ({timeZone}), as on each gift&apos;s own receipt.
       </Soft>
     </EmailLayout>
   );

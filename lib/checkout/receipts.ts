@@ -1,3 +1,4 @@
+import { centerYear } from "@/lib/giving/center-time";
 import { formatUsd, isCents, sumCents } from "./money";
 
 // What a receipt says about gifts (PRODUCT.md §6), for U.S. federal income tax.
@@ -184,17 +185,11 @@ export type YearEndStatement = {
   statements: string[];
 };
 
-function calendarYear(date: Date, timeZone: string): number {
-  const year = new Intl.DateTimeFormat("en-US", { timeZone, year: "numeric" }).format(date);
-  return Number(year);
-}
-
 /**
  * A donor's gifts in one calendar year, totalled, oldest first.
- * The year is read in UTC by default, the clock the payment processor and the database keep, so
- * the same gift never lands in two years. A gift made on the evening of December 31 in the
- * Americas is already January 1 in UTC: pass the center's `timeZone` (an IANA name such as
- * "America/Chicago") to count by its local calendar instead.
+ * The year is the center's own (PRODUCT.md §6): pass its `timeZone` (the giving settings,
+ * lib/giving/queries.ts). A gift made on the evening of December 31 in the Americas is already
+ * January 1 in UTC and still counts in December's year. Without a zone the year is UTC's.
  */
 export function yearEndStatement({
   gifts,
@@ -217,7 +212,7 @@ export function yearEndStatement({
       }
       return { date, amountCents: gift.amountCents, orderId: gift.orderId };
     })
-    .filter((gift) => calendarYear(gift.date, timeZone) === year)
+    .filter((gift) => centerYear(gift.date, timeZone) === year)
     .sort((a, b) => a.date.getTime() - b.date.getTime());
   const totalCents = sumCents(inYear.map((gift) => gift.amountCents));
   const count = inYear.length;

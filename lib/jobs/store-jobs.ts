@@ -6,6 +6,7 @@ import { runMailDelivery } from "@/lib/mail/delivery-job";
 import { kickMailSender, MAIL_DELIVERY_JOB } from "@/lib/mail/kick";
 import { queueSeasonalReminders } from "@/lib/mail/commands/seasonal-reminders";
 import { queueRoostReportMail } from "@/lib/roost-reports/commands";
+import { queueJanuaryStatements } from "@/lib/giving/commands/statements";
 import { registerJob } from "./registry";
 
 // Every background job of the store, in one list. To add one: write its handler in its domain
@@ -17,6 +18,7 @@ export const RESERVATION_SWEEP_JOB = "reservations-expire";
 export const SEASONAL_REMINDERS_JOB = "mail-seasonal-reminders";
 export const REFUND_RETRY_JOB = "refunds-retry";
 export const ROOST_REPORT_MAIL_JOB = "roost-report-questions";
+export const JANUARY_STATEMENTS_JOB = "giving-january-statements";
 
 // Unpaid reservations older than 30 minutes give their stock back; every minute, as before.
 registerJob(
@@ -85,6 +87,22 @@ registerJob(
   },
   {
     schedule: { cron: "0 9 * * *", tz: STORE_TIME_ZONE, catchUp: true },
+    retry: { limit: 6, delaySeconds: 60, backoff: true, maxDelaySeconds: 60 * 60 },
+    runOnStart: true,
+  },
+);
+
+// Year-end statements: every hour, and once at start; the handler acts only in the first days of
+// January in the center's time zone (a setting, so not the schedule's zone), and the dedupe key
+// (donor, year) makes every run after the first in that window a no-op, on any instance.
+registerJob(
+  JANUARY_STATEMENTS_JOB,
+  async ({ now }) => {
+    const { queued } = await queueJanuaryStatements({ now });
+    if (queued > 0) kickMailSender();
+  },
+  {
+    schedule: { cron: "15 * * * *", tz: "UTC", catchUp: true },
     retry: { limit: 6, delaySeconds: 60, backoff: true, maxDelaySeconds: 60 * 60 },
     runOnStart: true,
   },

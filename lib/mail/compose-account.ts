@@ -10,6 +10,7 @@ import { PasswordResetEmail } from "@/emails/password-reset";
 import { SeasonalReminderEmail } from "@/emails/seasonal-reminder";
 import { YearEndStatementEmail } from "@/emails/year-end-statement";
 import type { Composition } from "./composition";
+import { getCenterTimeZone } from "@/lib/giving/queries";
 import { formatMailDate } from "./format";
 import { findModelForAlert, findReminderSubscription, listGiftsForStatement, loadUser } from "./queries/account-for-mail";
 import { loadOrgFooter } from "./queries/order-for-mail";
@@ -62,21 +63,23 @@ async function yearEnd(db: DbOrTx, payload: unknown): Promise<Composition> {
   });
   const user = await loadUser(db, userId);
   const rows = await listGiftsForStatement({ db, userId });
-  const statement = yearEndStatement({ gifts: rows, year });
+  const timeZone = await getCenterTimeZone(db);
+  const statement = yearEndStatement({ gifts: rows, year, timeZone });
   const numbers = new Map(rows.map((row) => [row.orderId, formatOrderNumber(row.number)]));
   return {
     element: createElement(YearEndStatementEmail, {
       org: await loadOrgFooter({ db }),
       donorName: user.name,
       year,
-      issuedOn: formatMailDate(new Date(issuedOn)),
+      issuedOn: formatMailDate(new Date(issuedOn), timeZone),
       gifts: statement.gifts.map((gift) => ({
-        date: formatMailDate(gift.date),
+        date: formatMailDate(gift.date, timeZone),
         orderNumber: numbers.get(gift.orderId) ?? "",
         amountCents: gift.amountCents,
       })),
       totalCents: statement.totalCents,
       statements: statement.statements,
+      timeZone,
     }),
   };
 }

@@ -17,6 +17,7 @@ import { RefundEmail } from "@/emails/refund";
 import { ShippedEmail } from "@/emails/shipped";
 import { orderBandWords } from "@/lib/climate/order-band";
 import type { Composition } from "./composition";
+import { getCenterTimeZone } from "@/lib/giving/queries";
 import { formatAddress, formatMailDate } from "./format";
 import { findGiftForOrder, loadOrderForMail, type OrderForMail } from "./queries/order-for-mail";
 import { receiptForOrder } from "./order-receipt";
@@ -67,12 +68,13 @@ function confirmation(data: OrderForMail): Composition {
 async function giftReceipt(db: DbOrTx, data: OrderForMail): Promise<Composition> {
   const gift = await findGiftForOrder({ db, orderId: data.order.id });
   if (!gift) throw new PermanentMailError(`Order ${data.number} has no recorded gift.`);
+  const timeZone = await getCenterTimeZone(db);
   return {
     element: createElement(GiftReceiptEmail, {
       org: data.org,
       donorName: data.order.name,
       orderNumber: data.number,
-      date: formatMailDate(gift.receivedAt),
+      date: formatMailDate(gift.receivedAt, timeZone),
       amountPaidCents: data.order.totalCents,
       giftCents: gift.amountCents,
       receipt: receiptForOrder(data.order, data.lines),

@@ -1,9 +1,9 @@
-// Dates in messages are read in UTC, the clock the payment service and the database keep, as
-// lib/checkout/receipts.ts does for year-end statements, so a receipt and a statement never
-// disagree about the day of a gift.
+// Dates in messages: a gift's date is the center's calendar day (pass its time zone,
+// lib/giving/queries.ts getCenterTimeZone), so a receipt and a statement never disagree about
+// the day of a gift. Without a zone the date is read in UTC.
 
-export function formatMailDate(date: Date): string {
-  return new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" }).format(date);
+export function formatMailDate(date: Date, timeZone = "UTC"): string {
+  return new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone }).format(date);
 }
 
 export function formatAddress(address: {

@@ -48,8 +48,17 @@ export const lowStockPayloadSchema = z.object({
   threshold: z.number().int().min(0),
 });
 
-/** Which composer renders a kind: order messages, the install guide, account messages. */
-export type MessageFamily = "order" | "guide" | "account" | "roost";
+export const monthlyFailedPayloadSchema = z.object({
+  monthlyGiftId: id,
+  amountCents: z.number().int().positive(),
+  /** The private manage link's path (no sign-in needed): kept, since the donor may have no account. */
+  managePath: z.string().startsWith("/give/monthly/"),
+});
+export const monthlyChangedPayloadSchema = z.object({ monthlyGiftId: id, change: z.enum(["amount", "stopped"]) });
+export const tributeNoticePayloadSchema = z.object({ orderId: id });
+
+/** Which composer renders a kind: order messages, the install guide, account messages, giving. */
+export type MessageFamily = "order" | "guide" | "account" | "roost" | "giving";
 
 export const MESSAGE_KINDS = {
   "order-confirmation": { family: "order", payload: orderPayloadSchema },
@@ -66,6 +75,9 @@ export const MESSAGE_KINDS = {
   "low-stock": { family: "account", payload: lowStockPayloadSchema },
   "roost-report-ask": { family: "roost", payload: roostAskPayloadSchema },
   "roost-report-advice": { family: "roost", payload: roostAdvicePayloadSchema },
+  "monthly-gift-failed": { family: "giving", payload: monthlyFailedPayloadSchema },
+  "monthly-gift-changed": { family: "giving", payload: monthlyChangedPayloadSchema },
+  "tribute-notice": { family: "giving", payload: tributeNoticePayloadSchema },
 } as const satisfies Record<string, { family: MessageFamily; payload: z.ZodType }>;
 
 export type MessageKind = keyof typeof MESSAGE_KINDS;

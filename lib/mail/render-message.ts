@@ -9,6 +9,7 @@ import type { Composition } from "./composition";
 import { isMessageKind, MESSAGE_KINDS, PermanentMailError } from "./payloads";
 import { PLAIN_TEXT_OPTIONS } from "./plain-text";
 import { composeRoostReportMessage } from "@/lib/roost-reports/compose-mail";
+import { composeGivingMessage } from "@/lib/giving/compose-mail";
 
 export type RenderedMessage = Omit<Composition, "element"> & { html: string; text: string };
 
@@ -30,6 +31,8 @@ function compose({
       return composeAccountMessage({ db, kind: row.kind, payload: row.payload });
     case "roost":
       return composeRoostReportMessage({ db, kind: row.kind, payload: row.payload });
+    case "giving":
+      return composeGivingMessage({ db, kind: row.kind, payload: row.payload });
   }
 }
 

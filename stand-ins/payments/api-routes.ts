@@ -11,11 +11,28 @@ import {
 import { findIntent } from "./payment-intent-inputs";
 import { cancelIntent, createIntent, retrieveIntent, updateIntent } from "./payment-intent-routes";
 import { createRefund, retrieveRefund } from "./refund-routes";
+import {
+  advanceTestClock,
+  cancelSubscription,
+  createPrice,
+  createProduct,
+  createSubscription,
+  createTestClock,
+  listInvoices,
+  listSubscriptions,
+  payInvoice,
+  retrieveInvoice,
+  retrievePrice,
+  retrieveProduct,
+  retrieveSubscription,
+  retrieveTestClock,
+  updateSubscription,
+} from "./billing-routes";
 
 /** The API surface of the payments stand-in. `publishable` marks what the browser library may call. */
 
 export interface ApiRoute {
-  method: "GET" | "POST";
+  method: "GET" | "POST" | "DELETE";
   pattern: RegExp;
   handler: RouteHandler;
   publishable?: boolean;
@@ -58,6 +75,21 @@ export const API_ROUTES: readonly ApiRoute[] = [
     handler: retrievePaymentMethod,
   },
   { method: "GET", pattern: new RegExp(`^/v1/events/${ID}$`), handler: retrieveEvent },
+  { method: "POST", pattern: /^\/v1\/products$/, handler: createProduct },
+  { method: "GET", pattern: new RegExp(`^/v1/products/${ID}$`), handler: retrieveProduct },
+  { method: "POST", pattern: /^\/v1\/prices$/, handler: createPrice },
+  { method: "GET", pattern: new RegExp(`^/v1/prices/${ID}$`), handler: retrievePrice },
+  { method: "POST", pattern: /^\/v1\/subscriptions$/, handler: createSubscription },
+  { method: "GET", pattern: /^\/v1\/subscriptions$/, handler: listSubscriptions },
+  { method: "GET", pattern: new RegExp(`^/v1/subscriptions/${ID}$`), handler: retrieveSubscription },
+  { method: "POST", pattern: new RegExp(`^/v1/subscriptions/${ID}$`), handler: updateSubscription },
+  { method: "DELETE", pattern: new RegExp(`^/v1/subscriptions/${ID}$`), handler: cancelSubscription },
+  { method: "GET", pattern: /^\/v1\/invoices$/, handler: listInvoices },
+  { method: "GET", pattern: new RegExp(`^/v1/invoices/${ID}$`), handler: retrieveInvoice },
+  { method: "POST", pattern: new RegExp(`^/v1/invoices/${ID}/pay$`), handler: payInvoice },
+  { method: "POST", pattern: /^\/v1\/test_helpers\/test_clocks$/, handler: createTestClock },
+  { method: "GET", pattern: new RegExp(`^/v1/test_helpers/test_clocks/${ID}$`), handler: retrieveTestClock },
+  { method: "POST", pattern: new RegExp(`^/v1/test_helpers/test_clocks/${ID}/advance$`), handler: advanceTestClock },
 ];
 
 export function matchApiRoute({ method, path }: { method: string; path: string }) {

@@ -1,3 +1,4 @@
+import { settleInvoiceIntent } from "./billing";
 import { recordCharge } from "./charges";
 import type { ApiRequest, ApiResponse, PaymentsEngine } from "./engine";
 import { StripeApiError, invalidRequest } from "./errors";
@@ -137,6 +138,7 @@ export function confirmIntent({
     intent.amount_received = intent.amount;
     intent.last_payment_error = null;
     engine.emitEvent({ type: "payment_intent.succeeded", object: intent, request });
+    settleInvoiceIntent({ engine, intent, request });
     return { status: 200, body: presentIntent({ engine, intent, request }) };
   }
   intent.status = "requires_payment_method";
@@ -150,6 +152,7 @@ export function confirmIntent({
     payment_method: method,
   };
   engine.emitEvent({ type: "payment_intent.payment_failed", object: intent, request });
+  settleInvoiceIntent({ engine, intent, request });
   throw new StripeApiError({
     status: 402,
     body: {

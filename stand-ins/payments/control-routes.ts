@@ -1,3 +1,4 @@
+import { advanceClock } from "./billing";
 import type { PaymentsEngine } from "./engine";
 import type { IdempotencyStore } from "./idempotency";
 import type { WebhookDispatcher } from "./webhook-dispatcher";
@@ -11,6 +12,8 @@ import type { WebhookDispatcher } from "./webhook-dispatcher";
  *   GET  /_stand-in/webhooks                   { url, paused, held }
  *   POST /_stand-in/webhooks/pause | resume    hold deliveries / send what was held
  *   POST /_stand-in/reset                      forget every object, event, attempt and idempotency key
+ *   GET  /_stand-in/test-clocks                every test clock (to find a customer's without an API key)
+ *   POST /_stand-in/test-clocks/:id/advance    JSON body { days } or { frozen_time }: as the API's advance
  */
 
 export interface ControlContext {
@@ -87,6 +90,24 @@ export async function handleControlRequest({
       return { status: 200, body: { data: attempts } };
     }
   }
+  if (method === "GET" && path === "/_stand-in/test-clocks") {
+    return { status: 200, body: { data: [...engine.state.testClocks.values()] } };
+  }
+  const clockMatch = /^\/_stand-in\/test-clocks\/([A-Za-z0-9_]+)\/advance$/.exec(path);
+  if (method === "POST" && clockMatch?.[1]) {
+    const clock = engine.state.testClocks.get(clockMatch[1]);
+    if (!clock) return { status: 404, body: { error: { message: `No such test clock: '${clockMatch[1]}'` } } };
+    let asked: { days?: unknown; frozen_time?: unknown } = {};
+    try {
+      asked = body.trim() ? (JSON.parse(body) as typeof asked) : {};
+    } catch {
+      asked = {};
+    }
+    const to = typeof asked.frozen_time === "number" ? asked.frozen_time : clock.frozen_time + Math.round(Number(asked.days ?? 0) * 86_400);
+    if (!Number.isInteger(to) || to <= clock.frozen_time) return { status: 400, body: { error: { message: "The test clock can only move forward." } } };
+    advanceClock({ engine, clock, to, request: { method, path, params: {}, auth: { kind: "secret", key: "" }, requestId: "req_control", idempotencyKey: null, apiVersion: "2026-10-28.endive" } });
+    return { status: 200, body: clock };
+  }
   if (method === "GET" && path === "/_stand-in/deliveries")
     return { status: 200, body: { data: dispatcher.attempts() } };
   if (method === "GET" && path === "/_stand-in/webhooks")
@@ -107,6 +128,12 @@ export async function handleControlRequest({
       state.customers,
       state.paymentMethods,
       state.cardNumbers,
+      state.products,
+      state.prices,
+      state.subscriptions,
+      state.invoices,
+      state.invoiceOfIntent,
+      state.testClocks,
     ].forEach((map) => map.clear());
     state.events.length = 0;
     dispatcher.clearAttempts();

@@ -1,9 +1,11 @@
 import { createPrefixedId, nowInUnixSeconds } from "../shared/ids";
+import type { Invoice, Price, Product, Subscription, TestClock } from "./billing-objects";
 import type { Params } from "./params";
 import type {
   CardPaymentMethod,
   Charge,
   Customer,
+  EventObject,
   EventType,
   PaymentIntent,
   Refund,
@@ -21,6 +23,13 @@ export interface PaymentsState {
   /** Card digits behind each PaymentMethod, kept apart so no API answer can leak them. */
   cardNumbers: Map<string, string>;
   events: StripeEvent[];
+  products: Map<string, Product>;
+  prices: Map<string, Price>;
+  subscriptions: Map<string, Subscription>;
+  invoices: Map<string, Invoice>;
+  /** Which invoice each invoice payment intent pays. */
+  invoiceOfIntent: Map<string, string>;
+  testClocks: Map<string, TestClock>;
 }
 
 export interface ApiRequest {
@@ -43,7 +52,7 @@ export interface PaymentsEngine {
   state: PaymentsState;
   emitEvent(input: {
     type: EventType;
-    object: PaymentIntent | Charge;
+    object: EventObject;
     request: ApiRequest;
   }): StripeEvent;
 }
@@ -69,6 +78,12 @@ export function createPaymentsEngine({
     paymentMethods: new Map(),
     cardNumbers: new Map(),
     events: [],
+    products: new Map(),
+    prices: new Map(),
+    subscriptions: new Map(),
+    invoices: new Map(),
+    invoiceOfIntent: new Map(),
+    testClocks: new Map(),
   };
   return {
     state,

@@ -21,7 +21,15 @@ const CUSTOMER_PARAMS = [
   "phone",
   "shipping",
   "preferred_locales",
+  "test_clock",
+  "invoice_settings",
 ];
+
+function readTestClock(engine: Parameters<RouteHandler>[0]["engine"], id: string | undefined): string | null {
+  if (!id) return null;
+  if (!engine.state.testClocks.has(id)) throw resourceMissing({ kind: "test_helpers.test_clock", id, param: "test_clock", status: 400 });
+  return id;
+}
 
 function nullableText(value: string | undefined, fallback: string | null): string | null {
   if (value === undefined) return fallback;
@@ -43,6 +51,7 @@ export const createCustomer: RouteHandler = ({ engine, request }) => {
     name: nullableText(readOptionalString(params, "name"), null),
     phone: nullableText(readOptionalString(params, "phone"), null),
     shipping: params.shipping ?? null,
+    test_clock: readTestClock(engine, readOptionalString(params, "test_clock")),
   };
   engine.state.customers.set(customer.id, customer);
   return { status: 200, body: customer };

@@ -1,3 +1,5 @@
+import type { Invoice, Subscription } from "./billing-objects";
+
 /**
  * The API objects the payments stand-in keeps, with the fields the real objects carry that
  * an order flow reads. Field names and meanings follow the PaymentIntent, Charge, Refund,
@@ -139,20 +141,29 @@ export interface Customer {
   name: string | null;
   phone: string | null;
   shipping: unknown;
+  /** The test clock the customer's subscriptions run on, if any. */
+  test_clock: string | null;
 }
 
 export type EventType =
   | "payment_intent.succeeded"
   | "payment_intent.payment_failed"
   | "payment_intent.canceled"
-  | "charge.refunded";
+  | "charge.refunded"
+  | "invoice.paid"
+  | "invoice.payment_failed"
+  | "customer.subscription.created"
+  | "customer.subscription.updated"
+  | "customer.subscription.deleted";
+
+export type EventObject = PaymentIntent | Charge | Invoice | Subscription;
 
 export interface StripeEvent {
   id: string;
   object: "event";
   api_version: string;
   created: number;
-  data: { object: PaymentIntent | Charge };
+  data: { object: EventObject };
   livemode: false;
   pending_webhooks: number;
   request: { id: string | null; idempotency_key: string | null };

@@ -2,6 +2,9 @@ import { sql } from "drizzle-orm";
 import { getDb, type Db } from "@/db/client";
 
 const TABLES = [
+  "giving_settings",
+  "gift_dedications",
+  "monthly_gifts",
   "roost_reports",
   "roost_ask_opt_outs",
   "roost_report_link_uses",

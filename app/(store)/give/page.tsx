@@ -1,12 +1,13 @@
 import type { Metadata } from "next";
-import { GiveForm } from "@/components/checkout/give-form";
+import { GivingForm } from "@/components/giving/giving-form";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { getSessionUser } from "@/lib/auth/session";
+import { getGivingSettings } from "@/lib/giving/queries";
 
 export const metadata: Metadata = { title: "Give" };
 
 export default async function GivePage() {
-  const user = await getSessionUser();
+  const [user, settings] = await Promise.all([getSessionUser(), getGivingSettings()]);
   return (
     <PageShell>
       <div className="grid gap-10 lg:grid-cols-[1fr_1.1fr]">
@@ -21,7 +22,7 @@ export default async function GivePage() {
           </p>
         </div>
         <div className="rounded-xl border border-paper-200 bg-white p-6 shadow-card">
-          <GiveForm defaultContact={user ? { name: user.name, email: user.email } : null} />
+          <GivingForm defaultContact={user ? { name: user.name, email: user.email } : null} fee={{ basisPoints: settings.feeBasisPoints, fixedCents: settings.feeFixedCents }} />
         </div>
       </div>
     </PageShell>

@@ -4,6 +4,8 @@ import { ShippingRatesForm } from "@/components/admin/shipping-rates-form";
 import { TaxRatesForm } from "@/components/admin/tax-rates-form";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { Card } from "@/components/ui/card";
+import { GivingSettingsForm } from "@/components/giving/giving-settings-form";
+import { getGivingSettings } from "@/lib/giving/queries";
 import { getOrganization, listShippingRates, listTaxRates } from "@/lib/admin/queries";
 import { requirePageUser } from "@/lib/auth/guard";
 import type { UsState } from "@/lib/checkout/us-states";
@@ -12,7 +14,7 @@ export const metadata: Metadata = { title: "Center settings" };
 
 export default async function AdminSettingsPage() {
   await requirePageUser("admin:settings", "/admin/settings");
-  const [org, rates, taxes] = await Promise.all([getOrganization(), listShippingRates(), listTaxRates()]);
+  const [org, rates, taxes, giving] = await Promise.all([getOrganization(), listShippingRates(), listTaxRates(), getGivingSettings()]);
   return (
     <PageShell>
       <PageHeader title="Center settings" lead="The details printed on receipts, the parcel rate table and the sales tax rates. Changes apply to the next quote." />
@@ -26,6 +28,11 @@ export default async function AdminSettingsPage() {
                 : { legalName: "", displayName: "", street: "", city: "", state: "OR", zip: "", taxId: "", email: "", phone: "" }
             }
           />
+        </Card>
+        <Card>
+          <h2 className="mb-1 font-display text-2xl font-semibold text-moss-900">Giving and planning</h2>
+          <p className="mb-4 text-ink-soft">The calendar gifts are dated in, the card fee donors may cover, and the workshop&apos;s lead time for the build plan.</p>
+          <GivingSettingsForm initial={giving} />
         </Card>
         <Card>
           <h2 className="mb-1 font-display text-2xl font-semibold text-moss-900">Parcel rates</h2>

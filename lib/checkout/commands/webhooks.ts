@@ -3,6 +3,9 @@ import { eq, or } from "drizzle-orm";
 import type Stripe from "stripe";
 import type { Tx } from "@/db/client";
 import { gifts, orderLines, orders, webhookEvents, type OrderRow } from "@/db/schema";
+import { onInvoicePaid, onInvoicePaymentFailed, onSubscriptionDeleted } from "@/lib/giving/commands/invoice-events";
+import { queueTributeNotice } from "@/lib/giving/commands/once";
+import { isMonthlyGiftCustomer } from "@/lib/giving/queries";
 import { AppError } from "@/lib/http/errors";
 import { withOutbox } from "@/lib/mail/commands/outbox";
 import { changeOrderStatus, recordOrderEvent, SYSTEM_ACTOR } from "@/lib/orders/commands";
@@ -76,7 +79,14 @@ function whyRefused(order: OrderRow): string {
     : `the order was already ${order.status.replace(/_/g, " ")} when the payment arrived`;
 }
 
+/** A monthly gift's invoice payment: its gift is recorded on invoice.paid, not on the intent. */
+async function isInvoicePayment(tx: Tx, intent: Stripe.PaymentIntent): Promise<boolean> {
+  const customer = typeof intent.customer === "string" ? intent.customer : intent.customer?.id;
+  return Boolean(customer && !intent.metadata?.orderId && (await isMonthlyGiftCustomer(customer, tx)));
+}
+
 async function onSucceeded(tx: Tx, intent: Stripe.PaymentIntent): Promise<Effects> {
+  if (await isInvoicePayment(tx, intent)) return { outcome: "ignored: a monthly gift's invoice payment (recorded on invoice.paid)", refundIds: [] };
   const order = await findOrder(tx, intent);
   if (!order) throw new RetryLater(`no order for ${intent.id} yet`);
   if (order.status === "pending_payment" && intent.amount !== order.totalCents) {
@@ -121,11 +131,13 @@ async function onSucceeded(tx: Tx, intent: Stripe.PaymentIntent): Promise<Effect
       .insert(gifts)
       .values({ orderId: order.id, userId: order.userId, email: order.email, amountCents: order.giftCents, receivedAt: paidAt })
       .onConflictDoNothing();
+    await queueTributeNotice(tx, order);
   }
   return { outcome: "paid", refundIds: [] };
 }
 
 async function onFailed(tx: Tx, intent: Stripe.PaymentIntent): Promise<Effects> {
+  if (await isInvoicePayment(tx, intent)) return { outcome: "ignored: a monthly gift's invoice payment (handled on invoice.payment_failed)", refundIds: [] };
   const order = await findOrder(tx, intent);
   if (!order) throw new RetryLater(`no order for ${intent.id} yet`);
   if (order.status !== "pending_payment") return { outcome: `ignored: order is ${order.status}`, refundIds: [] };
@@ -148,6 +160,10 @@ export async function processPaymentEvent(event: Stripe.Event): Promise<{ outcom
     let effects: Effects = { outcome: "recorded", refundIds: [] };
     if (event.type === "payment_intent.succeeded") effects = await onSucceeded(tx, event.data.object);
     else if (event.type === "payment_intent.payment_failed") effects = await onFailed(tx, event.data.object);
+    // Monthly gifts (lib/giving): each paid invoice is a gift; a failed renewal asks for a new card.
+    else if (event.type === "invoice.paid") effects = { outcome: await onInvoicePaid(tx, event.data.object), refundIds: [] };
+    else if (event.type === "invoice.payment_failed") effects = { outcome: await onInvoicePaymentFailed(tx, event.data.object), refundIds: [] };
+    else if (event.type === "customer.subscription.deleted") effects = { outcome: await onSubscriptionDeleted(tx, event.data.object), refundIds: [] };
     await tx
       .update(webhookEvents)
       .set({ processedAt: new Date(), outcome: effects.outcome })

@@ -2,12 +2,15 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { orderLines, organization, type OrderRow } from "@/db/schema";
+import { getCenterTimeZone } from "@/lib/giving/queries";
 import { goodsOfOrder, receiptFor, type Receipt } from "../receipts";
 
 export type OrderReceipt = Receipt & {
   refundedCents: number;
   organization: { legalName: string; street: string; city: string; state: string; zip: string; taxId: string } | null;
   date: string | null;
+  /** The center's time zone: the receipt's date is its calendar day there. */
+  timeZone: string;
 };
 
 /**
@@ -68,5 +71,6 @@ export async function getOrderReceipt(order: OrderRow): Promise<OrderReceipt> {
       ? { legalName: org.legalName, street: org.street, city: org.city, state: org.state, zip: org.zip, taxId: org.taxId }
       : null,
     date: order.paidAt ? order.paidAt.toISOString() : null,
+    timeZone: await getCenterTimeZone(db),
   };
 }

@@ -15,6 +15,7 @@ export const PROTECTED_PAGES: { path: string; allowed: DemoRole[]; heading: RegE
   { path: "/admin/users", allowed: ["admin"], heading: /^Accounts and roles$/ },
   { path: "/admin/settings", allowed: ["admin"], heading: /^Center settings$/ },
   { path: "/admin/mail", allowed: ["admin"], heading: /^Mail$/ },
+  { path: "/admin/reports", allowed: ["admin"], heading: /^Reports$/ },
   { path: "/account/gifts", allowed: ["customer", "staff", "fulfillment", "admin"], heading: /^Your gifts$/ },
   { path: "/account/preferences", allowed: ["customer", "staff", "fulfillment", "admin"], heading: /^E-mail preferences$/ },
   { path: "/account/sites", allowed: ["customer", "staff", "fulfillment", "admin"], heading: /^Your saved sites$/ },

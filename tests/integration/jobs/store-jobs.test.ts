@@ -9,7 +9,7 @@ import { DEMO_USERS } from "@/lib/demo/seed-data";
 import { RESERVATION_MS } from "@/lib/checkout/commands/orders";
 import { defineJob, listJobs, type JobDefinition } from "@/lib/jobs/registry";
 import { startJobs, stopJobs } from "@/lib/jobs/runner";
-import { REFUND_RETRY_JOB, RESERVATION_SWEEP_JOB, ROOST_REPORT_MAIL_JOB, SEASONAL_REMINDERS_JOB } from "@/lib/jobs/store-jobs";
+import { JANUARY_STATEMENTS_JOB, REFUND_RETRY_JOB, RESERVATION_SWEEP_JOB, ROOST_REPORT_MAIL_JOB, SEASONAL_REMINDERS_JOB } from "@/lib/jobs/store-jobs";
 import { MAIL_DELIVERY_JOB } from "@/lib/mail/kick";
 import type { MailStandIn } from "@/stand-ins/mail/server";
 import { resetDb } from "../../support/db";
@@ -49,7 +49,7 @@ function storeJob(name: string): JobDefinition {
 }
 
 describe("the store's jobs", () => {
-  it("are the sweeper, the refund retry, the outbox sender, the seasonal reminders and the roost-report questions, each on a schedule", () => {
+  it("are the sweeper, the refund retry, the outbox sender, the seasonal reminders, the roost-report questions and the January statements, each on a schedule", () => {
     expect(
       Object.fromEntries(listJobs().map((j) => [j.name, j.options.schedule])),
     ).toEqual({
@@ -58,6 +58,7 @@ describe("the store's jobs", () => {
       [SEASONAL_REMINDERS_JOB]: { cron: "0 8 * * *", tz: "America/Los_Angeles", catchUp: true },
       [REFUND_RETRY_JOB]: { cron: "* * * * *" },
       [ROOST_REPORT_MAIL_JOB]: { cron: "0 9 * * *", tz: "America/Los_Angeles", catchUp: true },
+      [JANUARY_STATEMENTS_JOB]: { cron: "15 * * * *", tz: "UTC", catchUp: true },
     });
   });
 

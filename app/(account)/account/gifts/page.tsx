@@ -11,12 +11,14 @@ import { formatUsd } from "@/lib/checkout/money";
 import { yearEndStatement } from "@/lib/checkout/receipts";
 import { listGiftsForUser } from "@/lib/mail/queries/donor-gifts";
 import { formatMailDate } from "@/lib/mail/format";
+import { centerYear } from "@/lib/giving/center-time";
+import { getCenterTimeZone, listMonthlyGiftsForUser } from "@/lib/giving/queries";
 
 export const metadata: Metadata = { title: "Your gifts" };
 
 function pickYear(raw: string | string[] | undefined, years: number[]): number {
   const asked = typeof raw === "string" && /^\d{4}$/.test(raw) ? Number(raw) : NaN;
-  return years.includes(asked) ? asked : (years[0] ?? new Date().getUTCFullYear());
+  return years.includes(asked) ? asked : (years[0] ?? asked);
 }
 
 export default async function GiftsPage({
@@ -25,15 +27,16 @@ export default async function GiftsPage({
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
   const user = await requirePageUser("account", "/account/gifts");
-  const gifts = await listGiftsForUser({ userId: user.id });
-  const thisYear = new Date().getUTCFullYear();
-  const years = [...new Set([thisYear, ...gifts.map((g) => g.date.getUTCFullYear())])].sort(
+  const [gifts, timeZone, monthly] = await Promise.all([listGiftsForUser({ userId: user.id }), getCenterTimeZone(), listMonthlyGiftsForUser(user.id)]);
+  const thisYear = centerYear(new Date(), timeZone);
+  const years = [...new Set([thisYear, ...gifts.map((g) => centerYear(g.date, timeZone))])].sort(
     (a, b) => b - a,
   );
   const year = pickYear((await searchParams).year, years);
   const statement = yearEndStatement({
     gifts: gifts.map((g) => ({ date: g.date, amountCents: g.amountCents, orderId: g.orderId })),
     year,
+    timeZone,
   });
   const numbers = new Map(gifts.map((g) => [g.orderId, g.orderNumber]));
 
@@ -43,6 +46,23 @@ export default async function GiftsPage({
         title="Your gifts"
         lead="Every conservation gift you made while signed in, and a statement for any year for your tax records."
       />
+      {monthly.length > 0 ? (
+        <Card as="section" aria-labelledby="monthly-heading" className="mb-8 flex flex-col gap-2">
+          <h2 id="monthly-heading" className="font-display text-2xl font-semibold text-moss-900">
+            Your monthly gifts
+          </h2>
+          <ul className="flex flex-col gap-1">
+            {monthly.map((m) => (
+              <li key={m.id}>
+                {formatUsd(m.amountCents)} a month · {m.status === "stopped" ? "stopped" : m.status === "past_due" ? "payment did not go through" : m.status === "pending" ? "waiting for the first payment" : "active"} ·{" "}
+                <Link className="underline" href={`/give/monthly/${m.id}`}>
+                  {m.status === "stopped" ? "see it" : "change or stop it"}
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </Card>
+      ) : null}
       {gifts.length === 0 ? (
         <EmptyState
           title="No gifts yet"
@@ -62,7 +82,7 @@ export default async function GiftsPage({
             <TBody>
               {gifts.map((gift) => (
                 <Tr key={gift.orderId}>
-                  <Td>{formatMailDate(gift.date)}</Td>
+                  <Td>{formatMailDate(gift.date, timeZone)}</Td>
                   <Td>{gift.orderNumber}</Td>
                   <Td numeric>{formatUsd(gift.amountCents)}</Td>
                 </Tr>
@@ -96,7 +116,7 @@ export default async function GiftsPage({
               <ul className="flex flex-col gap-1 text-ink-soft">
                 {statement.gifts.map((gift) => (
                   <li key={gift.orderId}>
-                    {formatMailDate(gift.date)} · {numbers.get(gift.orderId)} ·{" "}
+                    {formatMailDate(gift.date, timeZone)} · {numbers.get(gift.orderId)} ·{" "}
                     {formatUsd(gift.amountCents)}
                   </li>
                 ))}
@@ -106,7 +126,7 @@ export default async function GiftsPage({
               <p key={line}>{line}</p>
             ))}
             <p className="text-sm text-ink-soft">
-              Dates are read in UTC, as on each gift&apos;s receipt.
+              Dates and years are the center&apos;s own ({timeZone}), as on each gift&apos;s receipt.
             </p>
             {statement.count > 0 ? <YearEndButton year={year} email={user.email} /> : null}
           </Card>

@@ -10,11 +10,13 @@ import { getOrderReceipt } from "@/lib/checkout/queries/receipt";
 import { formatUsd } from "@/lib/checkout/money";
 import { OrderLineList } from "@/components/orders/order-line-list";
 import { AppError } from "@/lib/http/errors";
+import { formatCenterDate } from "@/lib/giving/center-time";
+import { dedicationLines } from "@/lib/giving/dedication-words";
+import { findDedicationForOrder } from "@/lib/giving/queries";
 
 export const metadata: Metadata = { title: "Receipt" };
 
 type Props = { params: Promise<{ id: string }>; searchParams: Promise<{ t?: string }> };
-const day = new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" });
 const TITLES = {
   gift: "Gift receipt",
   mixed: "Receipt for your purchase and gift",
@@ -44,7 +46,8 @@ export default async function ReceiptPage({ params, searchParams }: Props) {
       </PageShell>
     );
   }
-  const [receipt, lines] = await Promise.all([getOrderReceipt(order), getOrderLines({ orderId: order.id })]);
+  const [receipt, lines, dedication] = await Promise.all([getOrderReceipt(order), getOrderLines({ orderId: order.id }), findDedicationForOrder(order.id)]);
+  const extras = dedicationLines(dedication);
   const org = receipt.organization;
   return (
     <PageShell>
@@ -60,7 +63,7 @@ export default async function ReceiptPage({ params, searchParams }: Props) {
           ) : null}
           <h1 className="mt-4 font-display text-3xl font-semibold text-moss-900">{TITLES[receipt.kind]}</h1>
           <p>
-            {formatOrderNumber(order.number)} · {order.name} · {receipt.date ? day.format(new Date(receipt.date)) : ""}
+            {formatOrderNumber(order.number)} · {order.name} · {receipt.date ? formatCenterDate(new Date(receipt.date), receipt.timeZone) : ""}
           </p>
         </header>
         <OrderLineList lines={lines} className="mt-4" />
@@ -90,6 +93,13 @@ export default async function ReceiptPage({ params, searchParams }: Props) {
             </>
           ) : null}
         </dl>
+        {extras.length > 0 ? (
+          <section className="mt-6 flex flex-col gap-1" aria-label="About this gift" data-testid="gift-extras">
+            {extras.map((line) => (
+              <p key={line}>{line}</p>
+            ))}
+          </section>
+        ) : null}
         <section className="mt-6 flex flex-col gap-2 rounded-lg bg-paper-100 p-4" aria-label="Statements for tax purposes">
           {receipt.statements.map((s) => (
             <p key={s}>{s}</p>

@@ -1,0 +1,12 @@
+import { getSessionUser } from "@/lib/auth/session";
+import { startGiftOnce } from "@/lib/giving/commands/once";
+import { giveOnceSchema } from "@/lib/giving/once-schemas";
+import { parseJson, route } from "@/lib/http/route";
+
+export const dynamic = "force-dynamic";
+
+// A gift on its own with a tribute or the card fee covered; the payment is the ordinary checkout's.
+export const POST = route({ public: true }, async ({ request }) => {
+  const input = await parseJson(request, giveOnceSchema);
+  return startGiftOnce(input, await getSessionUser());
+});
