@@ -7,6 +7,7 @@ import { Field } from "@/components/ui/field";
 import { FormError } from "@/components/ui/form-error";
 import { Input } from "@/components/ui/input";
 import { formatUsd } from "@/lib/checkout/money";
+import { fetchJson, isApiError } from "@/lib/http/client";
 
 /** Change the monthly amount or stop, each confirmed before it is done. */
 export function MonthlyManage({ id, token, amountCents }: { id: string; token: string | null; amountCents: number }) {
@@ -22,16 +23,15 @@ export function MonthlyManage({ id, token, amountCents }: { id: string; token: s
     setBusy(true);
     setError(null);
     try {
-      const res = await fetch(`/api/giving/monthly/${id}`, {
+      const body = await fetchJson<{ amountCents: number }>(`/api/giving/monthly/${id}`, {
         method,
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify(method === "PATCH" ? { amountCents: cents, ...(token ? { token } : {}) } : token ? { token } : {}),
+        json: method === "PATCH" ? { amountCents: cents, ...(token ? { token } : {}) } : token ? { token } : {},
       });
-      const body = await res.json();
-      if (!res.ok) return setError(body?.error?.message ?? "That did not work; please try again.");
       setConfirming(null);
       setDone(method === "PATCH" ? `Done: your monthly gift is now ${formatUsd(body.amountCents)}, from the next payment on. We sent you a confirmation.` : "Done: your monthly gift is stopped. No further payment will be taken.");
       router.refresh();
+    } catch (failure) {
+      setError(isApiError(failure) ? failure.message : "That did not work; please try again.");
     } finally {
       setBusy(false);
     }
