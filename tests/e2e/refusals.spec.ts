@@ -1,5 +1,6 @@
 import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
+import { fileURLToPath } from "node:url";
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { signInAs } from "./support/accounts";
 
@@ -9,7 +10,7 @@ import { signInAs } from "./support/accounts";
 // walking the folders; each gets bad path segments, bad queries and bad bodies, signed out and
 // as an administrator. No answer may be a 5xx.
 
-const APP = path.resolve(__dirname, "../../app");
+const APP = fileURLToPath(new URL("../../app", import.meta.url));
 
 function findRoutes(dir: string, found: string[] = []): string[] {
   for (const name of readdirSync(dir)) {
