@@ -99,6 +99,7 @@ test("the footer names the center from its settings, and staff are told which pa
   await expect(notice).toBeVisible();
   await expect(page.getByText(new RegExp(`No shipping rate covers parcels of ${DEMO_SHIPPING_RATES[0]!.maxBillableLb + 1}(–\\d+)? lb billable weight`))).toBeVisible();
   await expect(page.getByText(/Checkout refuses parcels of/)).toBeVisible();
+  await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path: "test-results/admin-settings-rate-notice.png", fullPage: false });
   await expectAccessible(page);
 
