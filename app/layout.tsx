@@ -3,22 +3,25 @@ import type { ReactNode } from "react";
 import { SiteFooter } from "@/components/site-footer";
 import { SiteHeader } from "@/components/site-header";
 import { Providers } from "@/components/providers";
+import { getCenterProfile } from "@/lib/admin/queries";
 import { getSessionUser } from "@/lib/auth/session";
 import { navFor } from "@/lib/auth/nav";
 import { env } from "@/lib/config/env";
 import { bodyFont, displayFont } from "./fonts";
 import "./globals.css";
 
-export const metadata: Metadata = {
-  title: { default: "Roostwright · Cedar Hollow Wildlife Rescue", template: "%s · Roostwright" },
-  description:
-    "Roostwright Sound Build bat roost houses, built by volunteers for Cedar Hollow Wildlife Rescue, matched to your summers, with an install guide for your site.",
-};
+export async function generateMetadata(): Promise<Metadata> {
+  const center = await getCenterProfile();
+  return {
+    title: { default: center.configured ? `Roostwright · ${center.name}` : "Roostwright", template: "%s · Roostwright" },
+    description: `Roostwright Sound Build bat roost houses, built by volunteers${center.configured ? ` for ${center.name}` : ""}, matched to your summers, with an install guide for your site.`,
+  };
+}
 
 export const viewport: Viewport = { themeColor: "#1f3a2e", width: "device-width", initialScale: 1 };
 
 export default async function RootLayout({ children }: { children: ReactNode }) {
-  const user = await getSessionUser();
+  const [user, center] = await Promise.all([getSessionUser(), getCenterProfile()]);
   const settings = env();
   return (
     <html lang="en" className={`${displayFont.variable} ${bodyFont.variable}`}>
@@ -37,7 +40,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
           <main id="main" tabIndex={-1} className="flex-1 outline-none">
             {children}
           </main>
-          <SiteFooter />
+          <SiteFooter center={center} />
         </Providers>
       </body>
     </html>

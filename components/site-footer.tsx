@@ -1,20 +1,9 @@
 import Link from "next/link";
 
 import { Wordmark } from "@/components/brand/wordmark";
+import type { CenterProfile } from "@/lib/admin/center-profile";
 
 type FooterLink = { href: string; label: string };
-
-// The center and its details are invented for this store; the phone number sits in the
-// 555-01xx range kept for fiction, the e-mail on a reserved .example domain.
-export const centerDetails = {
-  name: "Cedar Hollow Wildlife Rescue",
-  street: "2180 Alder Bend Road",
-  town: "Larkspur Falls",
-  state: "OR",
-  zip: "97399",
-  phone: "(541) 555-0148",
-  email: "hello@cedarhollow.example",
-} as const;
 
 const defaultLinks: FooterLink[] = [
   { href: "/houses", label: "Houses" },
@@ -24,15 +13,14 @@ const defaultLinks: FooterLink[] = [
 ];
 
 /** The foot of every page: who runs the store, how to reach them, and that it is a nonprofit. */
-export function SiteFooter({ links = defaultLinks }: { links?: FooterLink[] }) {
-  const c = centerDetails;
+export function SiteFooter({ center: c, links = defaultLinks }: { center: CenterProfile; links?: FooterLink[] }) {
   return (
     <footer className="mt-16 bg-moss-900 text-paper-200 [&_a]:text-paper-50 [&_a]:decoration-moss-300 [&_a:hover]:decoration-ember-300 [&_:focus-visible]:outline-ember-300">
       <div className="mx-auto grid max-w-page gap-10 px-4 py-12 sm:px-6 sm:grid-cols-2 md:grid-cols-[1.4fr_1fr_1fr]">
         <div className="flex flex-col gap-4 sm:col-span-2 md:col-span-1">
-          <Wordmark tone="light" withCenter />
+          <Wordmark tone="light" centerName={c.configured ? c.name : undefined} />
           <p className="max-w-sm text-sm leading-relaxed text-moss-200">
-            Roostwright is the nonprofit store of {c.name}. Volunteers build and inspect every
+            {c.configured ? `Roostwright is the nonprofit store of ${c.name}.` : "Roostwright is a nonprofit store."} Volunteers build and inspect every
             house, and every sale and gift pays for the care of injured and orphaned bats.
           </p>
         </div>
@@ -43,14 +31,18 @@ export function SiteFooter({ links = defaultLinks }: { links?: FooterLink[] }) {
           </h2>
           <address className="flex flex-col gap-1 not-italic">
             <span>{c.name}</span>
-            <span>{c.street}</span>
-            <span>
-              {c.town}, {c.state} {c.zip}
-            </span>
-            <a href={`tel:${c.phone.replace(/[^\d]/g, "")}`} className="mt-2">
-              {c.phone}
-            </a>
-            <a href={`mailto:${c.email}`}>{c.email}</a>
+            {c.street ? <span>{c.street}</span> : null}
+            {c.city ? (
+              <span>
+                {c.city}, {c.state} {c.zip}
+              </span>
+            ) : null}
+            {c.phone ? (
+              <a href={`tel:${c.phone.replace(/[^\d]/g, "")}`} className="mt-2">
+                {c.phone}
+              </a>
+            ) : null}
+            {c.email ? <a href={`mailto:${c.email}`}>{c.email}</a> : null}
           </address>
         </div>
 

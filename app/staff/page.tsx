@@ -1,12 +1,15 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { RateCoverageAlert } from "@/components/admin/rate-coverage-alert";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { formatDay } from "@/components/staff/status-badges";
 import { Badge } from "@/components/ui/badge";
 import { ButtonLink } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
+import { getRateCoverage } from "@/lib/admin/queries";
 import { requirePageUser } from "@/lib/auth/guard";
+import { can } from "@/lib/auth/roles";
 import {
   countModelsByStatus,
   listCertificationsDue,
@@ -27,12 +30,13 @@ function dueWords(
 }
 
 export default async function StaffHomePage() {
-  await requirePageUser("staff:models", "/staff");
+  const user = await requirePageUser("staff:models", "/staff");
   const now = new Date();
-  const [counts, lowStock, due] = await Promise.all([
+  const [counts, lowStock, due, coverage] = await Promise.all([
     countModelsByStatus(),
     listLowStockModels(),
     listCertificationsDue({ now }),
+    getRateCoverage(),
   ]);
   return (
     <PageShell>
@@ -47,6 +51,7 @@ export default async function StaffHomePage() {
           </ButtonLink>
         </div>
       </PageHeader>
+      <RateCoverageAlert coverage={coverage} settingsLink={can(user.role, "admin:settings")} className="mb-6" />
       <div className="grid gap-4 sm:grid-cols-3">
         {(
           [

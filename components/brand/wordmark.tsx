@@ -5,12 +5,12 @@ import { LogoMark } from "./logo-mark";
 type WordmarkProps = {
   className?: string;
   tone?: "dark" | "light";
-  /** Adds the center's name under the store's, for the footer and e-mails. */
-  withCenter?: boolean;
+  /** The center's name (from its settings) set under the store's, for the footer. */
+  centerName?: string;
 };
 
 /** The mark and the name "Roostwright" set in the display face. */
-export function Wordmark({ className, tone = "dark", withCenter = false }: WordmarkProps) {
+export function Wordmark({ className, tone = "dark", centerName }: WordmarkProps) {
   return (
     <span className={cn("inline-flex items-center gap-2.5", className)}>
       <LogoMark tone={tone} className="size-10 shrink-0" />
@@ -23,10 +23,8 @@ export function Wordmark({ className, tone = "dark", withCenter = false }: Wordm
         >
           Roostwright
         </span>
-        {withCenter ? (
-          <span className={cn("mt-1 text-xs", tone === "dark" ? "text-ink-soft" : "text-moss-200")}>
-            Cedar Hollow Wildlife Rescue
-          </span>
+        {centerName ? (
+          <span className={cn("mt-1 text-xs", tone === "dark" ? "text-ink-soft" : "text-moss-200")}>{centerName}</span>
         ) : null}
       </span>
     </span>

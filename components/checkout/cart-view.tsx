@@ -39,7 +39,14 @@ type Details = z.infer<typeof detailsSchema>;
 const postJson = <T,>(url: string, body: unknown): Promise<T> => fetchJson<T>(url, { json: body });
 
 /** The cart: lines, delivery, gift and the buyer's details, priced by the server at every step. */
-export function CartView({ defaultContact }: { defaultContact: { name: string; email: string } | null }) {
+export function CartView({
+  defaultContact,
+  pickupPlace,
+}: {
+  defaultContact: { name: string; email: string } | null;
+  /** Where pickup happens, from the center's settings: "the rescue in <town>". */
+  pickupPlace: string;
+}) {
   const router = useRouter();
   const cart = useCart();
   const { site: savedSite } = useSavedSite();
@@ -159,7 +166,7 @@ export function CartView({ defaultContact }: { defaultContact: { name: string; e
           <label className="flex items-start gap-3 rounded-lg border border-paper-200 bg-white p-4">
             <input type="radio" name="method" className="mt-1 size-5 accent-moss-700" checked={method === "pickup"} onChange={() => setMethod("pickup")} />
             <span>
-              <span className="font-bold">Pick it up at the rescue in Larkspur Falls</span>
+              <span className="font-bold">Pick it up at {pickupPlace}</span>
               <span className="block text-sm text-ink-soft">Free; we e-mail you when it is ready.</span>
             </span>
           </label>

@@ -23,7 +23,8 @@ const envSchema = z.object({
   RESEND_API_KEY: z.string().min(1).optional(),
   RESEND_BASE_URL: z.string().url().optional(),
   MAIL_PORT: z.coerce.number().int().default(12112),
-  MAIL_FROM: z.string().default("Cedar Hollow Wildlife Rescue <store@cedarhollow.example>"),
+  // The address mail is sent from; the display name is the center's, read from its settings at send time.
+  MAIL_FROM: z.string().default("Roostwright store <store@roostwright.example>"),
   S3_ENDPOINT: z.string().url().optional(),
   S3_BUCKET: z.string().default("roostwright-photos"),
   S3_ACCESS_KEY_ID: z.string().optional(),

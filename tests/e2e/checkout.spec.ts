@@ -1,4 +1,6 @@
 import { expect, test, type Page } from "@playwright/test";
+import { DEMO_ORGANIZATION, DEMO_SHIPPING_RATES } from "../../lib/demo/seed-data";
+import { signInAs } from "./support/accounts";
 import { expectAccessible } from "./support/axe";
 
 async function addToCart(page: Page, slug: string) {
@@ -73,4 +75,43 @@ test("a gift on its own from /give gets a gift receipt", async ({ page }) => {
   await page.getByRole("link", { name: "View your receipt" }).click();
   await expect(page.getByTestId("receipt")).toHaveAttribute("data-kind", "gift");
   await expect(page.getByTestId("receipt")).toContainText("No goods or services");
+});
+
+// Runs last in this file: it changes the rate table and puts it back.
+test("the footer names the center from its settings, and staff are told which parcels no rate covers", async ({ page }) => {
+  await page.goto("/");
+  const footer = page.getByRole("contentinfo");
+  await expect(footer).toContainText(DEMO_ORGANIZATION.displayName);
+  await expect(footer).toContainText(`${DEMO_ORGANIZATION.city}, ${DEMO_ORGANIZATION.state} ${DEMO_ORGANIZATION.zip}`);
+  await footer.screenshot({ path: "test-results/home-footer.png" });
+
+  await signInAs(page, "admin");
+  await page.goto("/admin/settings");
+  const notice = page.getByText(/No shipping rate covers parcels of/);
+  await expect(page.getByRole("heading", { name: "Parcel rates" })).toBeVisible();
+  await expect(notice).toHaveCount(0);
+
+  // Keep only the lightest tier: the heavier houses on sale are no longer covered.
+  for (let i = DEMO_SHIPPING_RATES.length; i > 1; i--) await page.getByRole("button", { name: "Remove" }).nth(i - 1).click();
+  await page.getByRole("button", { name: "Save rates" }).click();
+  await expect(page.getByText("Saved 1 rate tiers.")).toBeVisible();
+  await page.reload();
+  await expect(notice).toBeVisible();
+  await expect(page.getByText(new RegExp(`No shipping rate covers parcels of ${DEMO_SHIPPING_RATES[0]!.maxBillableLb + 1}(–\\d+)? lb billable weight`))).toBeVisible();
+  await expect(page.getByText(/Checkout refuses parcels of/)).toBeVisible();
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await page.screenshot({ path: "test-results/admin-settings-rate-notice.png", fullPage: false });
+  await expectAccessible(page);
+
+  // Put the table back; the notice goes away.
+  for (let i = 1; i < DEMO_SHIPPING_RATES.length; i++) {
+    await page.getByRole("button", { name: "Add a tier" }).click();
+    await page.getByLabel(`Tier ${i + 1} weight limit in pounds`).fill(String(DEMO_SHIPPING_RATES[i]!.maxBillableLb));
+    await page.getByLabel(`Tier ${i + 1} price in dollars`).fill((DEMO_SHIPPING_RATES[i]!.cents / 100).toFixed(2));
+  }
+  await page.getByRole("button", { name: "Save rates" }).click();
+  await expect(page.getByText(`Saved ${DEMO_SHIPPING_RATES.length} rate tiers.`)).toBeVisible();
+  await page.reload();
+  await expect(page.getByRole("heading", { name: "Parcel rates" })).toBeVisible();
+  await expect(notice).toHaveCount(0);
 });

@@ -1,12 +1,13 @@
 import type { Metadata } from "next";
 import { OrganizationForm } from "@/components/admin/organization-form";
+import { RateCoverageAlert } from "@/components/admin/rate-coverage-alert";
 import { ShippingRatesForm } from "@/components/admin/shipping-rates-form";
 import { TaxRatesForm } from "@/components/admin/tax-rates-form";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { Card } from "@/components/ui/card";
 import { GivingSettingsForm } from "@/components/giving/giving-settings-form";
 import { getGivingSettings } from "@/lib/giving/queries";
-import { getOrganization, listShippingRates, listTaxRates } from "@/lib/admin/queries";
+import { getOrganization, getRateCoverage, listShippingRates, listTaxRates } from "@/lib/admin/queries";
 import { requirePageUser } from "@/lib/auth/guard";
 import type { UsState } from "@/lib/checkout/us-states";
 
@@ -14,11 +15,12 @@ export const metadata: Metadata = { title: "Center settings" };
 
 export default async function AdminSettingsPage() {
   await requirePageUser("admin:settings", "/admin/settings");
-  const [org, rates, taxes, giving] = await Promise.all([getOrganization(), listShippingRates(), listTaxRates(), getGivingSettings()]);
+  const [org, rates, taxes, giving, coverage] = await Promise.all([getOrganization(), listShippingRates(), listTaxRates(), getGivingSettings(), getRateCoverage()]);
   return (
     <PageShell>
       <PageHeader title="Center settings" lead="The details printed on receipts, the parcel rate table and the sales tax rates. Changes apply to the next quote." />
       <div className="flex flex-col gap-8">
+        <RateCoverageAlert coverage={coverage} />
         <Card>
           <h2 className="mb-4 font-display text-2xl font-semibold text-moss-900">The center&apos;s details</h2>
           <OrganizationForm

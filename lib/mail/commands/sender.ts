@@ -2,6 +2,8 @@ import "server-only";
 import { and, asc, eq, lte, sql } from "drizzle-orm";
 import { getDb, type Db } from "@/db/client";
 import { outbox, type OutboxRow } from "@/db/schema";
+import { mailFrom } from "@/lib/admin/center-profile";
+import { getOrganization } from "@/lib/admin/queries";
 import { env } from "@/lib/config/env";
 import { planRetry } from "../backoff";
 import { getMailClient } from "../mail-client";
@@ -68,6 +70,7 @@ async function deliverOne(
   db: Db,
   row: OutboxRow,
   now: Date,
+  from: string,
 ): Promise<"sent" | "retrying" | "failed"> {
   let rendered;
   try {
@@ -80,7 +83,7 @@ async function deliverOne(
   }
   const { data, error } = await getMailClient().emails.send(
     {
-      from: env().MAIL_FROM,
+      from,
       to: row.toAddress,
       subject: row.subject,
       html: rendered.html,
@@ -123,10 +126,13 @@ export async function deliverPendingMail({
     .orderBy(asc(outbox.nextAttemptAt), asc(outbox.createdAt))
     .limit(limit);
   const report: DeliveryReport = { sent: 0, retrying: 0, failed: 0 };
+  if (due.length === 0) return report;
+  // The center's name is read at send time, so a rename on /admin/settings shows on the next message.
+  const from = mailFrom(env().MAIL_FROM, (await getOrganization())?.displayName);
   for (const { id } of due) {
     const row = await claim(db, id, now);
     if (!row) continue;
-    report[await deliverOne(db, row, now)] += 1;
+    report[await deliverOne(db, row, now, from)] += 1;
   }
   return report;
 }
