@@ -45,6 +45,9 @@ export default async function StaffHomePage() {
           <ButtonLink href="/staff/roost-reports" variant="secondary">
             Roost reports
           </ButtonLink>
+          <ButtonLink href="/staff/reports" variant="secondary">
+            Stock report
+          </ButtonLink>
         </div>
       </PageHeader>
       <div className="grid gap-4 sm:grid-cols-3">
