@@ -50,3 +50,4 @@ PROTECTED_ROUTES.push(
   { method: "GET", path: "/api/admin/reports/stock.csv", allowed: ["staff", "admin"] },
   { method: "GET", path: "/api/admin/reports/build-plan.csv", allowed: ["staff", "admin"] },
 );
+PROTECTED_PAGES.push({ path: "/admin/statements", allowed: ["admin"], heading: /^Year-end statements$/ });
