@@ -12,6 +12,8 @@ export type GiftReceiptProps = {
   amountPaidCents: number;
   giftCents: number;
   receipt: ReceiptView;
+  /** A tribute and a covered card fee, in words (lib/giving/dedication-words.ts); none for a plain gift. */
+  extras?: string[];
 };
 
 /** The gift receipt of PRODUCT.md §6: the organization, the date, the amount and what was received in exchange. */
@@ -23,6 +25,7 @@ export function GiftReceiptEmail({
   amountPaidCents,
   giftCents,
   receipt,
+  extras = [],
 }: GiftReceiptProps) {
   return (
     <EmailLayout org={org} preview={`Receipt for your gift of ${formatUsd(giftCents)} on ${date}.`}>
@@ -55,6 +58,9 @@ export function GiftReceiptEmail({
               ]
         }
       />
+      {extras.map((line) => (
+        <P key={line}>{line}</P>
+      ))}
       <Note>
         {receipt.statements.map((statement) => (
           <Soft key={statement}>{statement}</Soft>

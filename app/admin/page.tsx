@@ -10,6 +10,8 @@ const SECTIONS = [
   { href: "/admin/users", title: "Accounts and roles", text: "Who can use the workshop, the shipping desk and this page." },
   { href: "/admin/mail", title: "Mail", text: "Messages the store sent or is waiting to send, failures, and sending again." },
   { href: "/admin/settings", title: "Center settings", text: "Receipt details, parcel rates and sales tax." },
+  { href: "/admin/statements", title: "Year-end statements", text: "Preview a donor's statement for a year and send it again." },
+  { href: "/admin/reports", title: "Reports", text: "Sales and gifts by month, monthly donors, stock value and the build plan, with CSV files." },
 ];
 
 export default async function AdminHomePage() {

@@ -49,6 +49,9 @@ export default async function StaffHomePage() {
           <ButtonLink href="/staff/roost-reports" variant="secondary">
             Roost reports
           </ButtonLink>
+          <ButtonLink href="/staff/reports" variant="secondary">
+            Stock report
+          </ButtonLink>
         </div>
       </PageHeader>
       <RateCoverageAlert coverage={coverage} settingsLink={can(user.role, "admin:settings")} className="mb-6" />

@@ -17,7 +17,8 @@ import { RefundEmail } from "@/emails/refund";
 import { ShippedEmail } from "@/emails/shipped";
 import { orderBandWords } from "@/lib/climate/order-band";
 import type { Composition } from "./composition";
-import { getCenterTimeZone } from "@/lib/giving/queries";
+import { dedicationLines } from "@/lib/giving/dedication-words";
+import { findDedicationForOrder, getCenterTimeZone } from "@/lib/giving/queries";
 import { formatAddress, formatMailDate } from "./format";
 import { findGiftForOrder, loadOrderForMail, type OrderForMail } from "./queries/order-for-mail";
 import { receiptForOrder } from "./order-receipt";
@@ -69,6 +70,9 @@ async function giftReceipt(db: DbOrTx, data: OrderForMail): Promise<Composition>
   const gift = await findGiftForOrder({ db, orderId: data.order.id });
   if (!gift) throw new PermanentMailError(`Order ${data.number} has no recorded gift.`);
   const timeZone = await getCenterTimeZone(db);
+  // A one-time gift's tribute and covered fee, as on the receipt page. A monthly payment's order has
+  // none: its covered fee was worked out for the first amount and is not kept up when the donor changes it.
+  const dedication = await findDedicationForOrder(data.order.id, db);
   return {
     element: createElement(GiftReceiptEmail, {
       org: data.org,
@@ -78,6 +82,7 @@ async function giftReceipt(db: DbOrTx, data: OrderForMail): Promise<Composition>
       amountPaidCents: data.order.totalCents,
       giftCents: gift.amountCents,
       receipt: receiptForOrder(data.order, data.lines),
+      extras: dedicationLines(dedication),
     }),
   };
 }

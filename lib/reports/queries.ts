@@ -3,8 +3,11 @@ import { and, eq, gte, isNotNull, lt, sql } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { gifts, houseModels, monthlyGifts, orderLines, orders } from "@/db/schema";
 import { startOfDayInZone } from "@/lib/fulfillment/store-time";
-import { centerMonth } from "@/lib/giving/center-time";
+import { centerDate, centerDay, centerMonth } from "@/lib/giving/center-time";
+import { getGivingSettings } from "@/lib/giving/queries";
+import { buildPlan, type BuildPlan } from "./build-plan";
 import { figuresByMonth, type Figures } from "./figures";
+import { reportRange } from "./range";
 
 /** A from/to pair of center calendar days (both included). */
 export type ReportRange = { from: string; to: string };
@@ -66,4 +69,31 @@ export async function loadUnitsByMonth(since: Date, timeZone: string): Promise<M
     out.set(row.slug, sales);
   }
   return out;
+}
+
+/** The range asked for in the address, read against today in the center's zone. */
+export async function loadReportRange(asked: Record<string, unknown>, now = new Date()): Promise<ReportRange & { timeZone: string }> {
+  const { timeZone } = await getGivingSettings();
+  return { ...reportRange(asked, centerDay(now, timeZone)), timeZone };
+}
+
+export type StockReport = {
+  timeZone: string;
+  leadTimeWeeks: number;
+  stock: Awaited<ReturnType<typeof loadStock>>;
+  stockValueCents: number;
+  plan: BuildPlan;
+};
+
+/** The stock part of the reports (the workshop's): stock, its value and the build plan. */
+export async function loadStockReport(now = new Date()): Promise<StockReport> {
+  const settings = await getGivingSettings();
+  const lastYear = new Date(now.getTime() - 400 * 86_400_000);
+  const [stock, units] = await Promise.all([loadStock(), loadUnitsByMonth(lastYear, settings.timeZone)]);
+  const plan = buildPlan({
+    today: centerDate(now, settings.timeZone),
+    leadTimeWeeks: settings.leadTimeWeeks,
+    models: stock.map((m) => ({ slug: m.slug, name: m.name, stock: m.stock, sales: units.get(m.slug) ?? {} })),
+  });
+  return { timeZone: settings.timeZone, leadTimeWeeks: settings.leadTimeWeeks, stock, stockValueCents: stock.reduce((sum, m) => sum + m.valueCents, 0), plan };
 }

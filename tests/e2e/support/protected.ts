@@ -42,3 +42,12 @@ PROTECTED_PAGES.push(
   { path: "/staff/roost-reports", allowed: ["staff", "admin"], heading: /^Roost reports$/ },
   { path: "/staff/roost-reports/figures", allowed: ["staff", "admin"], heading: /^Roost report figures$/ },
 );
+
+// The center's reports (issue 17): admins see everything; workshop staff the stock part only.
+PROTECTED_PAGES.push({ path: "/staff/reports", allowed: ["staff", "admin"], heading: /^Stock report$/ });
+PROTECTED_ROUTES.push(
+  { method: "GET", path: "/api/admin/reports/sales.csv", allowed: ["admin"] },
+  { method: "GET", path: "/api/admin/reports/stock.csv", allowed: ["staff", "admin"] },
+  { method: "GET", path: "/api/admin/reports/build-plan.csv", allowed: ["staff", "admin"] },
+);
+PROTECTED_PAGES.push({ path: "/admin/statements", allowed: ["admin"], heading: /^Year-end statements$/ });

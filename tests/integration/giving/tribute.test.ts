@@ -60,6 +60,11 @@ describe("tribute gifts and the covered fee", () => {
     const db = await getDb();
     const rendered = await renderOutboxMessage({ db, row: notices[0]! });
     expect(rendered.text).toContain("in honour of Sam Reyes of $26.06");
+    // The donor's own gift receipt names the tribute and the covered fee.
+    const [receipt] = await db.select().from(outbox).where(eq(outbox.dedupeKey, `gift-receipt:${started.orderId}`));
+    const receiptText = (await renderOutboxMessage({ db, row: receipt! })).text;
+    expect(receiptText).toContain("This gift was made in honour of Sam Reyes.");
+    expect(receiptText).toContain("It includes $1.06 you added to cover the card fee; that is part of your gift.");
   });
 
   it("a gift without a notice e-mails nobody else", async () => {
@@ -67,5 +72,10 @@ describe("tribute gifts and the covered fee", () => {
     const { notices, gift } = await payAndLoad(started.orderId, started.clientSecret);
     expect(notices).toHaveLength(0);
     expect(gift!.amountCents).toBe(2_500);
+    const db = await getDb();
+    const [receipt] = await db.select().from(outbox).where(eq(outbox.dedupeKey, `gift-receipt:${started.orderId}`));
+    const receiptText = (await renderOutboxMessage({ db, row: receipt! })).text;
+    expect(receiptText).toContain("This gift was made in honour of Sam Reyes.");
+    expect(receiptText).not.toContain("card fee");
   });
 });
