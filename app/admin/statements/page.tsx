@@ -7,7 +7,7 @@ import { requirePageUser } from "@/lib/auth/guard";
 import { centerYear } from "@/lib/giving/center-time";
 import { listStatementDonors } from "@/lib/giving/commands/statements";
 import { getCenterTimeZone } from "@/lib/giving/queries";
-import { previewStatement } from "@/lib/giving/statement-preview";
+import { previewStatement } from "@/lib/mail/queries/statement-preview";
 
 export const metadata: Metadata = { title: "Year-end statements" };
 

@@ -4,7 +4,7 @@ import { getDb } from "@/db/client";
 import { gifts, orders, outbox, users } from "@/db/schema";
 import type { SessionUser } from "@/lib/auth/session";
 import { seedDemo } from "@/lib/demo/commands";
-import { previewStatement } from "@/lib/giving/statement-preview";
+import { previewStatement } from "@/lib/mail/queries/statement-preview";
 import { resetDb } from "../../support/db";
 
 // The admin's preview and "send again" of a year-end statement: the role is checked on the

@@ -1,6 +1,6 @@
 import "server-only";
 import { getDb } from "@/db/client";
-import { renderOutboxMessage, type RenderedMessage } from "@/lib/mail/render-message";
+import { renderOutboxMessage, type RenderedMessage } from "../render-message";
 
 /** The year-end statement one donor would receive now, rendered from the database as the sender would. */
 export async function previewStatement({ userId, year, now = new Date() }: { userId: string; year: number; now?: Date }): Promise<RenderedMessage> {
