@@ -7,6 +7,10 @@ const nextConfig = {
   images: { qualities: [60, 75, 85] },
   // The build must never touch the database; pages that read data are dynamic.
   typescript: { ignoreBuildErrors: false },
+  // The title and description (the center's name, read from its settings) go in <head> for every
+  // visitor, not streamed in after the page: a screen reader announces the page by its title as
+  // it loads, and WCAG 2.4.2 asks for one.
+  htmlLimitedBots: /.*/,
 };
 
 export default nextConfig;
