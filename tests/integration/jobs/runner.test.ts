@@ -4,7 +4,7 @@ import { closeDb, getDb } from "@/db/client";
 import { nudge } from "@/lib/jobs/nudge";
 import { defineJob, type JobContext } from "@/lib/jobs/registry";
 import { getRunningQueue, openJobRunner, startJobs, stopJobs, type JobRunner } from "@/lib/jobs/runner";
-import { dropQueueSchema, queueStates, secondInstanceDatabase, tickUntil } from "./support";
+import { dropQueueSchema, queueStates, secondInstanceDatabase, tickUntil, waitFor } from "./support";
 
 // The job runner on the queue, against the test database: an in-memory PGlite by default, the
 // PostgreSQL server of DATABASE_URL in CI's second pass. Time moves only through a TestClock, so
@@ -56,6 +56,8 @@ describe("scheduled jobs", () => {
       "2030-01-15T18:01": 1,
       "2030-01-15T18:02": 1,
     });
+    // The queue marks the last run done just after its handler returns.
+    await waitFor(async () => (await queueStates("test-every-minute")).every((state) => state === "completed"));
     expect(await queueStates("test-every-minute")).toEqual(["completed", "completed", "completed", "completed"]);
   });
 

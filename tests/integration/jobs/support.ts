@@ -43,3 +43,13 @@ export async function tickUntil(
     await new Promise((resolve) => setTimeout(resolve, 2));
   }
 }
+
+/**
+ * Polls in real time, with the test clock standing still, until `check` holds (at most `limitMs`).
+ * For what a worker writes just after its handler returns (the job's state, a follow-up it asks
+ * for): moving the clock instead could start another run.
+ */
+export async function waitFor(check: () => boolean | Promise<boolean>, limitMs = 5_000): Promise<void> {
+  const until = Date.now() + limitMs;
+  while (!(await check()) && Date.now() < until) await new Promise((resolve) => setTimeout(resolve, 20));
+}
