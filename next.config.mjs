@@ -5,7 +5,10 @@ const nextConfig = {
   poweredByHeader: false,
   typedRoutes: false,
   images: { qualities: [60, 75, 85] },
-  // The build must never touch the database; pages that read data are dynamic.
+  // Cache Components: what a page reads per visitor streams into a prerendered shell, and the
+  // catalog's reads are cached and tagged ("use cache", lib/catalog/cached.ts). The build never
+  // touches the database: cached data is read at request time (after `connection()`), then kept.
+  cacheComponents: true,
   typescript: { ignoreBuildErrors: false },
   // The title and description (the center's name, read from its settings) go in <head> for every
   // visitor, not streamed in after the page: a screen reader announces the page by its title as

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { signOut } from "next-auth/react";
-import { useEffect, useRef, useState, type KeyboardEvent } from "react";
+import { Suspense, useEffect, useRef, useState, type KeyboardEvent, type RefObject } from "react";
 
 import { Wordmark } from "@/components/brand/wordmark";
 import { Button, ButtonLink } from "@/components/ui/button";
@@ -14,7 +14,8 @@ type HeaderUser = { name: string; role: string };
 type NavLink = { href: string; label: string };
 
 type SiteHeaderProps = {
-  user: HeaderUser | null;
+  /** Who is signed in; `undefined` while the session streams in (the prerendered header). */
+  user: HeaderUser | null | undefined;
   nav: NavLink[];
   /** Where the skip link jumps; the layout's <main> carries this id. */
   mainId?: string;
@@ -31,13 +32,7 @@ function isCurrent(pathname: string, href: string): boolean {
  * works before scripts load.
  */
 export function SiteHeader({ user, nav, mainId = "main" }: SiteHeaderProps) {
-  const pathname = usePathname() ?? "/";
   const menuRef = useRef<HTMLDetailsElement>(null);
-
-  // The header outlives client-side navigation, so close the phone menu once a link is followed.
-  useEffect(() => {
-    if (menuRef.current) menuRef.current.open = false;
-  }, [pathname]);
 
   function closeOnEscape(event: KeyboardEvent<HTMLDetailsElement>) {
     const menu = menuRef.current;
@@ -45,8 +40,6 @@ export function SiteHeader({ user, nav, mainId = "main" }: SiteHeaderProps) {
     menu.open = false;
     menu.querySelector("summary")?.focus();
   }
-
-  const links = nav.map((item) => ({ ...item, current: isCurrent(pathname, item.href) }));
 
   return (
     <header className="relative z-40 border-b border-paper-300 bg-paper-50/95 backdrop-blur-sm">
@@ -62,23 +55,11 @@ export function SiteHeader({ user, nav, mainId = "main" }: SiteHeaderProps) {
         </Link>
 
         <nav aria-label="Main" className="hidden min-w-0 flex-1 xl:block">
-          <ul className="flex items-center gap-0.5">
-            {links.map((item) => (
-              <li key={item.href}>
-                <Link
-                  href={item.href}
-                  aria-current={item.current ? "page" : undefined}
-                  className={cn(
-                    "block rounded-lg px-2.5 py-2 font-bold whitespace-nowrap text-ink no-underline hover:bg-moss-50 hover:text-moss-800",
-                    item.current &&
-                      "bg-moss-50 text-moss-800 shadow-[inset_0_-3px_0] shadow-ember-400",
-                  )}
-                >
-                  {item.label}
-                </Link>
-              </li>
-            ))}
-          </ul>
+          {/* The page's own address is known only at request time on pages with a parameter: the
+              links render without "current" in the prerendered shell, and mark it once it streams. */}
+          <Suspense fallback={<RowLinks nav={nav} pathname={null} />}>
+            <CurrentRowLinks nav={nav} />
+          </Suspense>
         </nav>
 
         <div className="ml-auto hidden shrink-0 items-center gap-3 xl:flex">
@@ -103,22 +84,9 @@ export function SiteHeader({ user, nav, mainId = "main" }: SiteHeaderProps) {
           </summary>
           <div className="absolute inset-x-0 top-full border-b border-paper-300 bg-paper-50 px-4 pt-2 pb-5 shadow-lift sm:px-6">
             <nav aria-label="Main">
-              <ul className="flex flex-col">
-                {links.map((item) => (
-                  <li key={item.href} className="border-b border-paper-200 last:border-b-0">
-                    <Link
-                      href={item.href}
-                      aria-current={item.current ? "page" : undefined}
-                      className={cn(
-                        "flex min-h-12 items-center rounded-lg px-2 text-lg font-bold text-ink no-underline hover:bg-moss-50",
-                        item.current && "border-l-4 border-ember-400 pl-3 text-moss-800",
-                      )}
-                    >
-                      {item.label}
-                    </Link>
-                  </li>
-                ))}
-              </ul>
+              <Suspense fallback={<MenuLinks nav={nav} pathname={null} />}>
+                <CurrentMenuLinks nav={nav} menuRef={menuRef} />
+              </Suspense>
             </nav>
             <div className="mt-4 flex flex-wrap items-center gap-3 border-t border-paper-300 pt-4">
               <UserArea user={user} />
@@ -130,7 +98,9 @@ export function SiteHeader({ user, nav, mainId = "main" }: SiteHeaderProps) {
   );
 }
 
-function UserArea({ user }: { user: HeaderUser | null }) {
+function UserArea({ user }: { user: HeaderUser | null | undefined }) {
+  // Not known yet: hold the space the buttons take, so nothing moves when they arrive.
+  if (user === undefined) return <span aria-hidden className="block h-9 w-56" />;
   if (!user) {
     return (
       <>
@@ -170,5 +140,64 @@ function SignOutButton() {
     >
       Sign out
     </Button>
+  );
+}
+
+function marked(nav: NavLink[], pathname: string | null) {
+  return nav.map((item) => ({ ...item, current: pathname !== null && isCurrent(pathname, item.href) }));
+}
+
+function CurrentRowLinks({ nav }: { nav: NavLink[] }) {
+  return <RowLinks nav={nav} pathname={usePathname() ?? "/"} />;
+}
+
+function RowLinks({ nav, pathname }: { nav: NavLink[]; pathname: string | null }) {
+  return (
+    <ul className="flex items-center gap-0.5">
+      {marked(nav, pathname).map((item) => (
+        <li key={item.href}>
+          <Link
+            href={item.href}
+            aria-current={item.current ? "page" : undefined}
+            className={cn(
+              "block rounded-lg px-2.5 py-2 font-bold whitespace-nowrap text-ink no-underline hover:bg-moss-50 hover:text-moss-800",
+              item.current && "bg-moss-50 text-moss-800 shadow-[inset_0_-3px_0] shadow-ember-400",
+            )}
+          >
+            {item.label}
+          </Link>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+function CurrentMenuLinks({ nav, menuRef }: { nav: NavLink[]; menuRef: RefObject<HTMLDetailsElement | null> }) {
+  const pathname = usePathname() ?? "/";
+  // The header outlives client-side navigation, so close the phone menu once a link is followed.
+  useEffect(() => {
+    if (menuRef.current) menuRef.current.open = false;
+  }, [pathname, menuRef]);
+  return <MenuLinks nav={nav} pathname={pathname} />;
+}
+
+function MenuLinks({ nav, pathname }: { nav: NavLink[]; pathname: string | null }) {
+  return (
+    <ul className="flex flex-col">
+      {marked(nav, pathname).map((item) => (
+        <li key={item.href} className="border-b border-paper-200 last:border-b-0">
+          <Link
+            href={item.href}
+            aria-current={item.current ? "page" : undefined}
+            className={cn(
+              "flex min-h-12 items-center rounded-lg px-2 text-lg font-bold text-ink no-underline hover:bg-moss-50",
+              item.current && "border-l-4 border-ember-400 pl-3 text-moss-800",
+            )}
+          >
+            {item.label}
+          </Link>
+        </li>
+      ))}
+    </ul>
   );
 }

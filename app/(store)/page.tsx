@@ -1,7 +1,8 @@
 import Link from "next/link";
 import { BandFinder } from "@/components/catalog/band-finder";
 import { ButtonLink } from "@/components/ui/button";
-import { getCenterProfile } from "@/lib/admin/queries";
+import { Suspense } from "react";
+import { CenterCityClause, CenterKicker } from "@/components/center-bits";
 
 const STEPS = [
   {
@@ -24,19 +25,25 @@ const STEPS = [
   },
 ];
 
-export default async function HomePage() {
-  const center = await getCenterProfile();
+// Prerendered whole; only the center's name and city stream in from its settings.
+export default function HomePage() {
   return (
     <div>
       <section className="bg-moss-900 text-paper-50">
         <div className="mx-auto grid max-w-6xl gap-8 px-4 py-14 sm:px-6 md:grid-cols-[1.2fr_1fr] md:items-center">
           <div className="flex flex-col gap-5">
-            {center.configured ? <p className="text-sm font-bold tracking-wide text-ember-300 uppercase">{center.name}</p> : null}
+            <Suspense fallback={<p className="h-5" aria-hidden />}>
+              <CenterKicker className="text-sm font-bold tracking-wide text-ember-300 uppercase" />
+            </Suspense>
             <h1 className="font-display text-4xl font-semibold text-paper-50 sm:text-5xl">Bat houses that bats move into.</h1>
             <p className="max-w-prose text-lg text-paper-200">
               Built by our volunteers, measured by our workshop, matched to your summers, and sent with an install guide
               written for your house and your site. Every sale funds the care of injured and orphaned bats at our
-              rescue{center.city ? ` in ${center.city}` : ""}.
+              rescue
+              <Suspense fallback={null}>
+                <CenterCityClause />
+              </Suspense>
+              .
             </p>
             <div className="flex flex-wrap gap-3">
               <ButtonLink href="/houses" size="lg">

@@ -4,6 +4,9 @@ import { ButtonLink } from "@/components/ui/button";
 import { getSessionUser } from "@/lib/auth/session";
 import { ROLE_HOME, ROLE_LABELS } from "@/lib/auth/roles";
 
+// A private page, opened by its own link or token: rendered per request, and it may wait for its data.
+export const instant = false;
+
 export const metadata: Metadata = { title: "Not for this account" };
 
 export default async function ForbiddenPage() {

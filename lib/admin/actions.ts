@@ -3,11 +3,13 @@
 import { revalidatePath } from "next/cache";
 import { saveOrganization, saveShippingRates, saveTaxRates } from "@/lib/admin/commands";
 import { organizationSchema, shippingRatesSchema, taxRatesSchema } from "@/lib/admin/settings-schemas";
+import { expireCenter } from "@/lib/catalog/expire";
 import { action } from "@/lib/http/action";
 
 export const saveOrganizationAction = action({ permission: "admin:settings" }, organizationSchema, async (input) => {
   await saveOrganization(input);
   revalidatePath("/admin/settings");
+  expireCenter("action");
   return { saved: true };
 });
 

@@ -1,60 +1,17 @@
 import "server-only";
-import { and, asc, eq, gte, inArray, lte, sql, type SQL } from "drizzle-orm";
+import { asc, eq, inArray } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { houseModels, modelPhotos, type HouseModelRow } from "@/db/schema";
-import { certificationState, CERTIFICATION_STATE_WORDS, type CertificationStateId } from "./certification";
+import { certificationState, CERTIFICATION_STATE_WORDS } from "./certification";
 import type { BandId } from "./climate-bands";
-import { checkDesign, type DesignCheck } from "./design-check";
-import { fitForBand, type Fit } from "./fit";
+import { checkDesign } from "./design-check";
+import { fitForBand } from "./fit";
 import { houseSpecSchema, type HouseSpec } from "./spec";
 import { getLatestInspections } from "@/lib/inspections/queries";
+import { selectHouses } from "./select-houses";
+import type { CatalogFilters, Certification, HouseDetail, HouseSummary, PhotoRef } from "./house-types";
 
-export type CatalogFilters = {
-  band?: BandId;
-  /** At least this many chambers. */
-  chambers?: number;
-  mount?: "pole" | "building";
-  maxPriceCents?: number;
-  inStock?: boolean;
-};
-
-export type Certification = {
-  state: CertificationStateId;
-  certified: boolean;
-  words: string;
-  inspectedOn: string | null;
-  expiresAt: string | null;
-  expiresWithin30Days: boolean;
-};
-
-export type PhotoRef = { id: string; altText: string; keyBase: string; widths: number[]; width: number; height: number };
-
-export type HouseSummary = {
-  id: string;
-  slug: string;
-  name: string;
-  tagline: string;
-  status: HouseModelRow["status"];
-  priceCents: number;
-  stock: number;
-  mounts: string[];
-  backToBackKit: boolean;
-  spec: HouseSpec;
-  certified: boolean;
-  certification: Certification;
-  notes: number;
-  photo: PhotoRef | null;
-  fit?: Fit;
-};
-
-export type HouseDetail = HouseSummary & {
-  description: string;
-  builderName: string;
-  check: DesignCheck;
-  photos: PhotoRef[];
-  carton: { lengthIn: number; widthIn: number; heightIn: number; weightLb: number };
-  lowStockThreshold: number;
-};
+export type { CatalogFilters, Certification, HouseDetail, HouseSummary, PhotoRef } from "./house-types";
 
 type LatestInspection = { modelId: string; inspectedOn: Date; passed: boolean };
 
@@ -122,27 +79,23 @@ function summarize(
   return summary;
 }
 
-const FIT_ORDER = { good: 0, fair: 1, poor: 2 } as const;
-
-/** The public catalog: published models only, with a fit label when a band is chosen. */
-export async function listHouses(filters: CatalogFilters, now = new Date()): Promise<HouseSummary[]> {
+/** Every published model, cheapest first, without a band (lib/catalog/select-houses.ts filters them). */
+export async function listPublishedHouses(now = new Date()): Promise<HouseSummary[]> {
   const db = await getDb();
-  const where: SQL[] = [eq(houseModels.status, "published")];
-  if (filters.chambers) where.push(sql`(${houseModels.spec}->>'chamberCount')::int >= ${filters.chambers}`);
-  if (filters.mount) where.push(sql`${filters.mount} = any(${houseModels.mounts})`);
-  if (filters.maxPriceCents !== undefined) where.push(lte(houseModels.priceCents, filters.maxPriceCents));
-  if (filters.inStock) where.push(gte(houseModels.stock, 1));
   const rows = await db
     .select()
     .from(houseModels)
-    .where(and(...where))
+    .where(eq(houseModels.status, "published"))
     .orderBy(asc(houseModels.priceCents), asc(houseModels.name));
   const ids = rows.map((r) => r.id);
   const [latest, photos] = await Promise.all([latestInspections(ids), photosFor(ids)]);
-  const items = rows.map((r) => summarize(r, latest.get(r.id), photos.get(r.id), filters.band, now));
-  // A model on sale whose certification lapsed stays listed but says so; with a band, best fits first.
-  if (filters.band) items.sort((a, b) => FIT_ORDER[a.fit!.label] - FIT_ORDER[b.fit!.label]);
-  return items;
+  // A model on sale whose certification lapsed stays listed but says so.
+  return rows.map((r) => summarize(r, latest.get(r.id), photos.get(r.id), undefined, now));
+}
+
+/** The public catalog: published models only, filtered, with a fit label when a band is chosen. */
+export async function listHouses(filters: CatalogFilters, now = new Date()): Promise<HouseSummary[]> {
+  return selectHouses(await listPublishedHouses(now), filters);
 }
 
 /** One model by slug; drafts and retired models only when asked (staff pages). */
@@ -170,4 +123,11 @@ export async function getHouseBySlug(
     },
     lowStockThreshold: row.lowStockThreshold,
   };
+}
+
+/** Whether a model is on sale now (the staff actions ask it to know which cache tags a change touches). */
+export async function isModelOnSale(modelId: string): Promise<boolean> {
+  const db = await getDb();
+  const [row] = await db.select({ status: houseModels.status }).from(houseModels).where(eq(houseModels.id, modelId)).limit(1);
+  return row?.status === "published";
 }

@@ -1,13 +1,18 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { expireOccupancy } from "@/lib/catalog/expire";
 import { action } from "@/lib/http/action";
 import { reviewRoostReport } from "./commands";
 import { answerFromLink, stopFromLink } from "./link-answers";
 import { linkAnswerSchema, optOutSchema, reviewSchema } from "./report-input";
 
 /** The confirmation page's button: public, the signed token is the authority. */
-export const confirmLinkAnswerAction = action({ public: true }, linkAnswerSchema, async (input) => answerFromLink({ input }));
+export const confirmLinkAnswerAction = action({ public: true }, linkAnswerSchema, async (input) => {
+  const answered = await answerFromLink({ input });
+  expireOccupancy("action");
+  return answered;
+});
 
 export const stopRoostQuestionsAction = action({ public: true }, optOutSchema, async ({ token }) => {
   const { email } = await stopFromLink({ token });
@@ -19,5 +24,6 @@ export const stopRoostQuestionsAction = action({ public: true }, optOutSchema, a
 export const reviewRoostReportAction = action({ permission: "staff:roost-reports" }, reviewSchema, async (input, user) => {
   const row = await reviewRoostReport({ input, actorId: user!.id });
   revalidatePath("/staff/roost-reports");
+  expireOccupancy("action");
   return row;
 });

@@ -55,7 +55,7 @@ async function listCountedFacts(filter?: { modelId?: string }) {
   return rows;
 }
 
-type PublicStat = ReturnType<typeof publicStat>;
+export type PublicStat = ReturnType<typeof publicStat>;
 
 export type ModelOccupancy = {
   minimumHouses: number;

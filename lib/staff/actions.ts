@@ -1,6 +1,8 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import type { ModelChange } from "@/lib/catalog/cache-tags";
+import { expireModel } from "@/lib/catalog/expire";
 import { action } from "@/lib/http/action";
 import { inspectionInputSchema } from "@/lib/staff/inspection-input";
 import { recordInspection } from "@/lib/staff/commands/inspections";
@@ -21,10 +23,12 @@ import { adjustStockSchema, receiveStockSchema } from "@/lib/staff/stock-input";
 // and role on the server (`action`). Photo uploads go through the JSON route
 // (app/api/staff/models/[slug]/photos) for per-file progress; the rest are small changes made here.
 
-// Staff pages and the public catalog both show models; every change refreshes both.
-function refresh() {
+// Staff pages and the public catalog both show models. Every change refreshes the staff pages and
+// expires exactly the buyer-facing cache tags it touches (lib/catalog/expire.ts): the model's own,
+// and the catalog's when the model enters or leaves it or is on sale.
+async function refresh(modelId: string, change: ModelChange = "details") {
   revalidatePath("/staff", "layout");
-  revalidatePath("/houses", "layout");
+  await expireModel(modelId, change, "action");
 }
 
 export const createModelAction = action(
@@ -32,7 +36,7 @@ export const createModelAction = action(
   modelInputSchema,
   async (input) => {
     const created = await createModel({ input });
-    refresh();
+    await refresh(created.id);
     return created;
   },
 );
@@ -42,7 +46,7 @@ export const updateModelAction = action(
   updateModelSchema,
   async (input) => {
     const saved = await updateModel({ input });
-    refresh();
+    await refresh(saved.id);
     return saved;
   },
 );
@@ -52,7 +56,7 @@ export const publishModelAction = action(
   modelIdSchema,
   async ({ id }) => {
     const published = await publishModel({ id });
-    refresh();
+    await refresh(id, "listing");
     return published;
   },
 );
@@ -62,7 +66,7 @@ export const retireModelAction = action(
   modelIdSchema,
   async ({ id }) => {
     const retired = await retireModel({ id });
-    refresh();
+    await refresh(id, "listing");
     return retired;
   },
 );
@@ -72,7 +76,7 @@ export const returnModelToDraftsAction = action(
   modelIdSchema,
   async ({ id }) => {
     const drafted = await returnModelToDrafts({ id });
-    refresh();
+    await refresh(id, "listing");
     return drafted;
   },
 );
@@ -82,7 +86,7 @@ export const recordInspectionAction = action(
   inspectionInputSchema,
   async (input, user) => {
     const recorded = await recordInspection({ input, recordedById: user!.id });
-    refresh();
+    await refresh(input.modelId);
     return recorded;
   },
 );
@@ -92,7 +96,7 @@ export const removePhotoAction = action(
   photoIdSchema,
   async ({ id }) => {
     const removed = await removeModelPhoto({ id });
-    refresh();
+    await refresh(removed.modelId);
     return removed;
   },
 );
@@ -102,7 +106,7 @@ export const reorderPhotosAction = action(
   reorderPhotosSchema,
   async (input) => {
     await reorderModelPhotos({ input });
-    refresh();
+    await refresh(input.modelId);
     return { modelId: input.modelId };
   },
 );
@@ -112,7 +116,7 @@ export const updatePhotoAltAction = action(
   photoAltSchema,
   async (input) => {
     const photo = await updatePhotoAlt({ input });
-    refresh();
+    await refresh(photo.modelId);
     return photo;
   },
 );
@@ -122,7 +126,7 @@ export const receiveStockAction = action(
   receiveStockSchema,
   async (input, user) => {
     const moved = await receiveStock({ input, actorId: user!.id });
-    refresh();
+    await refresh(input.modelId);
     return moved;
   },
 );
@@ -132,7 +136,7 @@ export const adjustStockAction = action(
   adjustStockSchema,
   async (input, user) => {
     const moved = await adjustStock({ input, actorId: user!.id });
-    refresh();
+    await refresh(input.modelId);
     return moved;
   },
 );

@@ -5,6 +5,9 @@ import { Alert } from "@/components/ui/alert";
 import { ButtonLink } from "@/components/ui/button";
 import { checkResetToken } from "@/lib/mail/queries/password-reset";
 
+// A private page, opened by its own link or token: rendered per request, and it may wait for its data.
+export const instant = false;
+
 // The token is in the URL: keep it out of Referer headers and out of search engines.
 export const metadata: Metadata = {
   title: "Choose a new password",

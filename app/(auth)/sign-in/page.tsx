@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { redirect } from "next/navigation";
+import { Suspense } from "react";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { getSessionUser } from "@/lib/auth/session";
@@ -12,13 +13,27 @@ function safeNext(next: string | string[] | undefined): string {
   return typeof next === "string" && next.startsWith("/") && !next.startsWith("//") ? next : "/welcome";
 }
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+type SearchParams = Promise<Record<string, string | string[] | undefined>>;
+
+// The heading is the prerendered shell; the form streams in once the address's `next` and the
+// session are read (someone already signed in goes straight on).
+export default function SignInPage({ searchParams }: { searchParams: SearchParams }) {
+  return (
+    <PageShell narrow>
+      <PageHeader title="Sign in" lead="Staff, volunteers and supporters sign in here." />
+      <Suspense fallback={<div className="min-h-96" />}>
+        <SignInBody searchParams={searchParams} />
+      </Suspense>
+    </PageShell>
+  );
+}
+
+async function SignInBody({ searchParams }: { searchParams: SearchParams }) {
   const params = await searchParams;
   const next = safeNext(params.next);
   if (await getSessionUser()) redirect(next);
   return (
-    <PageShell narrow>
-      <PageHeader title="Sign in" lead="Staff, volunteers and supporters sign in here." />
+    <>
       <SignInForm next={next} />
       <p className="mt-6 text-ink-soft">
         New here?{" "}
@@ -32,6 +47,6 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
           Forgot your password?
         </Link>
       </p>
-    </PageShell>
+    </>
   );
 }

@@ -1,22 +1,32 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
+import { Suspense } from "react";
 import { SignUpForm } from "@/components/auth/sign-up-form";
 import { PageHeader, PageShell } from "@/components/page-header";
 import { getSessionUser } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Create an account" };
 
-export default async function SignUpPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const { next } = await searchParams;
-  const target = typeof next === "string" && next.startsWith("/") && !next.startsWith("//") ? next : "/account";
-  if (await getSessionUser()) redirect(target);
+type SearchParams = Promise<Record<string, string | string[] | undefined>>;
+
+// The heading is the prerendered shell; the form streams in once the session is read.
+export default function SignUpPage({ searchParams }: { searchParams: SearchParams }) {
   return (
     <PageShell narrow>
       <PageHeader
         title="Create a supporter account"
         lead="Keep your orders, saved sites and gift receipts in one place. Guests can buy and give without one."
       />
-      <SignUpForm next={target} />
+      <Suspense fallback={<div className="min-h-96" />}>
+        <SignUpBody searchParams={searchParams} />
+      </Suspense>
     </PageShell>
   );
+}
+
+async function SignUpBody({ searchParams }: { searchParams: SearchParams }) {
+  const { next } = await searchParams;
+  const target = typeof next === "string" && next.startsWith("/") && !next.startsWith("//") ? next : "/account";
+  if (await getSessionUser()) redirect(target);
+  return <SignUpForm next={target} />;
 }

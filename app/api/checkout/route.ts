@@ -5,7 +5,6 @@ import { orderBandFromChoice } from "@/lib/climate/order-band";
 import { checkoutRequestSchema } from "@/lib/checkout/schemas";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Guests and signed-in buyers: creates the order, reserves stock and the PaymentIntent.
 export const POST = route({ public: true }, async ({ request }) => {

@@ -2,7 +2,6 @@ import { requireClimate } from "@/lib/climate/queries";
 import { climateQuerySchema, toClimateInput } from "@/lib/climate/query-schema";
 import { parseQuery, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Public: ZIP code, latitude/longitude or a typed warmest-month high (°F or °C) → the climate result.
 export const GET = route({ public: true }, async ({ request }) =>

@@ -1,7 +1,6 @@
 import { NextResponse } from "next/server";
 import { pingDatabase } from "@/lib/health/queries";
 
-export const dynamic = "force-dynamic";
 
 // Public: load balancers probe it. It says whether the database answers, nothing more.
 export async function GET() {

@@ -1,14 +1,7 @@
 import { catalogQuerySchema } from "@/lib/catalog/catalog-query";
-import { toHouseCard } from "@/lib/catalog/house-card";
-import { listHouses } from "@/lib/catalog/queries";
+import { catalogCards } from "@/lib/catalog/buyer-view";
 import { parseQuery, route } from "@/lib/http/route";
-import { withOccupancyMarks } from "@/lib/roost-reports/catalog-marks";
 
-export const dynamic = "force-dynamic";
-
-// Public: the catalog, filtered; a band adds a fit label to every item.
-export const GET = route({ public: true }, async ({ request }) => {
-  const query = parseQuery(request, catalogQuerySchema);
-  const items = await listHouses(query);
-  return { items: await withOccupancyMarks(items.map(toHouseCard)), total: items.length };
-});
+// Public: the catalog, filtered; a band adds a fit label to every item. Read from the cached
+// catalog (lib/catalog/cached.ts), so it never waits on the database.
+export const GET = route({ public: true }, async ({ request }) => catalogCards(parseQuery(request, catalogQuerySchema)));

@@ -2,7 +2,6 @@ import { parseJson, route } from "@/lib/http/route";
 import { placementInputSchema } from "@/lib/placement/schema";
 import { checkSite } from "@/lib/placement/site-service";
 
-export const dynamic = "force-dynamic";
 
 // Public: a planned site → its band, sun on the face, the ten rules and the overall label.
 export const POST = route({ public: true }, async ({ request }) =>

@@ -6,7 +6,6 @@ import { checkSite } from "@/lib/placement/site-service";
 import { createSite } from "@/lib/placement/commands";
 import { listSitesByUser } from "@/lib/placement/queries";
 
-export const dynamic = "force-dynamic";
 
 // Anyone may save a site: to their account when signed in, else under a fresh guest token that
 // is answered once and kept by the browser with the cart. The check is run again here, so the

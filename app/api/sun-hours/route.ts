@@ -2,7 +2,6 @@ import { parseQuery, route } from "@/lib/http/route";
 import { sunHoursQuerySchema } from "@/lib/placement/schema";
 import { describeSunHours } from "@/lib/placement/sun-hours-answer";
 
-export const dynamic = "force-dynamic";
 
 // Public: hours of direct sun on a face for one day (or, without a date, the season mean).
 export const GET = route({ public: true }, async ({ request }) =>

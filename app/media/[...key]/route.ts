@@ -3,7 +3,6 @@ import { getImage, IMMUTABLE_CACHE } from "@/lib/uploads/object-store";
 import { parseMediaKey } from "@/lib/uploads/photo-keys";
 import { gated, jsonError } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Public: model photos are shown in the catalog. Only keys of the shape the server generates are
 // served (photos/<uuid>-<width>.webp), so this route cannot be used to read anything else in the

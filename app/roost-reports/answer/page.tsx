@@ -6,6 +6,9 @@ import { Alert } from "@/components/ui/alert";
 import { ANSWER_WORDS, COUNT_BAND_WORDS } from "@/lib/roost-reports/answers";
 import { previewLinkAnswer } from "@/lib/roost-reports/link-answers";
 
+// A private page, opened by its own link or token: rendered per request, and it may wait for its data.
+export const instant = false;
+
 // The token is in the URL: keep it out of Referer headers and out of search engines.
 export const metadata: Metadata = {
   title: "Your roost report",

@@ -4,6 +4,9 @@ import { StopQuestionsButton } from "@/components/roost-reports/stop-questions-b
 import { Alert } from "@/components/ui/alert";
 import { checkStopLink } from "@/lib/roost-reports/link-answers";
 
+// A private page, opened by its own link or token: rendered per request, and it may wait for its data.
+export const instant = false;
+
 export const metadata: Metadata = {
   title: "Stop end-of-season questions",
   referrer: "no-referrer",

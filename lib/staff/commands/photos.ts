@@ -11,6 +11,7 @@ import { MAX_PHOTOS_PER_MODEL, type PhotoAltInput, type ReorderPhotosInput } fro
 
 const toPhoto = (r: typeof modelPhotos.$inferSelect): StaffPhoto => ({
   id: r.id,
+  modelId: r.modelId,
   altText: r.altText,
   keyBase: r.keyBase,
   widths: r.widths,

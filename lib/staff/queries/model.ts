@@ -153,6 +153,7 @@ export async function listStockMovements({
 
 export type StaffPhoto = {
   id: string;
+  modelId: string;
   altText: string;
   keyBase: string;
   widths: number[];
@@ -170,6 +171,7 @@ export async function listModelPhotos({ modelId }: { modelId: string }): Promise
     .orderBy(asc(modelPhotos.position), asc(modelPhotos.createdAt));
   return rows.map((r) => ({
     id: r.id,
+    modelId: r.modelId,
     altText: r.altText,
     keyBase: r.keyBase,
     widths: r.widths,

@@ -8,7 +8,6 @@ import { resetDb } from "../../support/db";
 
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: async () => session.user }));
-vi.mock("next/cache", () => ({ revalidatePath: () => undefined }));
 
 const { saveOrganizationAction, saveShippingRatesAction, saveTaxRatesAction } = await import("@/lib/admin/actions");
 const as = (role: SessionUser["role"]) => ({ id: "00000000-0000-4000-8000-000000000001", name: role, email: `${role}@example.org`, role });

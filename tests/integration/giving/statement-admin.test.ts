@@ -11,7 +11,6 @@ import { resetDb } from "../../support/db";
 // server, bad input changes nothing, and each confirmed resend queues exactly one more message.
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: async () => session.user }));
-vi.mock("next/cache", () => ({ revalidatePath: () => undefined }));
 
 const { resendStatementAction } = await import("@/lib/giving/actions");
 const as = (role: SessionUser["role"]): SessionUser => ({ id: "00000000-0000-4000-8000-000000000001", name: role, email: `${role}@example.org`, role });

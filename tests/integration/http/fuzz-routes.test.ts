@@ -11,7 +11,6 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 
 const session = vi.hoisted(() => ({ user: null as null | { id: string; name: string; email: string; role: string } }));
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: vi.fn(async () => session.user) }));
-vi.mock("next/cache", () => ({ revalidatePath: vi.fn(), revalidateTag: vi.fn(), updateTag: vi.fn(), unstable_cache: (fn: unknown) => fn }));
 vi.mock("next/headers", () => {
   const jar = new Map<string, string>();
   return {

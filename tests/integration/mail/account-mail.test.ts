@@ -18,7 +18,6 @@ import { clearInbox, startTestMail } from "./helpers";
 
 const session = vi.hoisted(() => ({ user: null as SessionUser | null }));
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: async () => session.user }));
-vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 
 const { savePreferencesAction } = await import("@/lib/mail/actions");
 const { emailYearEndStatementAction } = await import("@/lib/mail/actions");

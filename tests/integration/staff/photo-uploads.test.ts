@@ -3,7 +3,6 @@ import sharp from "sharp";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: vi.fn(async () => null) }));
-vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 
 import { GET as getPhotos, POST as uploadPhoto } from "@/app/api/staff/models/[slug]/photos/route";
 import { GET as getMedia } from "@/app/media/[...key]/route";

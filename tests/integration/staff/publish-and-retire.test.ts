@@ -2,7 +2,6 @@ import { eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: vi.fn(async () => null) }));
-vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 
 import {
   createModelAction,

@@ -2,7 +2,6 @@ import { count } from "drizzle-orm";
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: vi.fn(async () => null) }));
-vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 
 import * as modelsRoute from "@/app/api/staff/models/route";
 import * as photosRoute from "@/app/api/staff/models/[slug]/photos/route";

@@ -2,7 +2,6 @@ import { eq, sql } from "drizzle-orm";
 import { beforeEach, describe, expect, it, vi } from "vitest";
 
 vi.mock("@/lib/auth/session", () => ({ getSessionUser: vi.fn(async () => null) }));
-vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 
 import { adjustStockAction, receiveStockAction } from "@/lib/staff/actions";
 import { GET as getLedger } from "@/app/api/staff/models/[slug]/stock-movements/route";

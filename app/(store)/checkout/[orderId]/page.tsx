@@ -14,6 +14,9 @@ import { OrderLineList } from "@/components/orders/order-line-list";
 import { env } from "@/lib/config/env";
 import { AppError } from "@/lib/http/errors";
 
+// A private page, opened by its own link or token: rendered per request, and it may wait for its data.
+export const instant = false;
+
 export const metadata: Metadata = { title: "Payment" };
 
 type Props = { params: Promise<{ orderId: string }>; searchParams: Promise<{ t?: string }> };

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Suspense } from "react";
 import { CriteriaTable } from "@/components/catalog/criteria-table";
 import { FitBadge } from "@/components/catalog/fit-badge";
 import { SpecTable } from "@/components/catalog/spec-table";
@@ -11,30 +12,25 @@ import { getBandChoice } from "@/lib/climate/band-cookie-server";
 import { CERTIFICATION_NAME, CERTIFICATION_SUMMARY } from "@/lib/catalog/certification";
 import { CLIMATE_BANDS } from "@/lib/catalog/climate-bands";
 import { drawingUrl, photoSrcSet, photoUrl } from "@/lib/catalog/photo-url";
-import { getHouseBySlug } from "@/lib/catalog/queries";
+import { houseForBuyer } from "@/lib/catalog/buyer-view";
+import { cachedModelOccupancy } from "@/lib/catalog/cached";
 import { formatUsd } from "@/lib/checkout/money";
 import { AddToCart } from "@/components/checkout/add-to-cart";
 import { OccupancyFigures } from "@/components/roost-reports/occupancy-figures";
-import { getModelOccupancy } from "@/lib/roost-reports/queries";
+import { LoadingRegion, Skeleton } from "@/components/ui/skeleton";
 
 type Props = { params: Promise<{ slug: string }> };
 
 export async function generateMetadata({ params }: Props): Promise<Metadata> {
-  const house = await getHouseBySlug({ slug: (await params).slug });
+  const house = await houseForBuyer((await params).slug);
   return { title: house?.name ?? "House not found" };
 }
 
 const dateFormat = new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" });
 
-export default async function HousePage({ params }: Props) {
-  const { slug } = await params;
-  const choice = await getBandChoice();
-  const house = await getHouseBySlug({ slug, band: choice?.id });
-  if (!house) notFound();
-  const band = choice ? CLIMATE_BANDS[choice.id] : null;
-  const { certification } = house;
-  const occupancy = await getModelOccupancy({ modelId: house.id });
-
+// The breadcrumb is the prerendered shell; the model streams in from the cached catalog (its slug
+// comes with the request, and its fit with the band cookie).
+export default function HousePage({ params }: Props) {
   return (
     <PageShell>
       <nav aria-label="Breadcrumb" className="mb-4 text-sm">
@@ -42,6 +38,38 @@ export default async function HousePage({ params }: Props) {
           All houses
         </Link>
       </nav>
+      <Suspense fallback={<HouseLoading />}>
+        <House params={params} />
+      </Suspense>
+    </PageShell>
+  );
+}
+
+function HouseLoading() {
+  return (
+    <LoadingRegion label="Loading the house…" className="grid gap-10 lg:grid-cols-[1.1fr_1fr]">
+      <Skeleton className="aspect-[4/3] w-full" />
+      <div className="flex flex-col gap-4">
+        <Skeleton className="h-10 w-2/3" />
+        <Skeleton className="h-6 w-1/2" />
+        <Skeleton className="h-12 w-40" />
+        <Skeleton className="h-40 w-full" />
+      </div>
+    </LoadingRegion>
+  );
+}
+
+async function House({ params }: Props) {
+  const { slug } = await params;
+  const choice = await getBandChoice();
+  const house = await houseForBuyer(slug, choice?.id);
+  if (!house) notFound();
+  const band = choice ? CLIMATE_BANDS[choice.id] : null;
+  const { certification } = house;
+  const occupancy = await cachedModelOccupancy(house.id);
+
+  return (
+    <>
       <div className="grid gap-10 lg:grid-cols-[1.1fr_1fr]">
         <div className="flex flex-col gap-4">
           {house.photos.length > 0 ? (
@@ -122,6 +150,6 @@ export default async function HousePage({ params }: Props) {
         </p>
         <CriteriaTable results={house.check.results} />
       </section>
-    </PageShell>
+    </>
   );
 }

@@ -19,6 +19,9 @@ import { OrderTimeline } from "@/components/orders/order-timeline";
 import { HouseReportPanel } from "@/components/roost-reports/house-report-panel";
 import { listReportQuestionsForViewer } from "@/lib/roost-reports/order-reports";
 
+// A private page, opened by its own link or token: rendered per request, and it may wait for its data.
+export const instant = false;
+
 export const metadata: Metadata = { title: "Your order" };
 
 type Props = { params: Promise<{ id: string }>; searchParams: Promise<{ t?: string }> };

@@ -4,7 +4,6 @@ import { AppError } from "@/lib/http/errors";
 import { unsubscribeSchema } from "@/lib/mail/account-schemas";
 import { unsubscribeByToken } from "@/lib/mail/commands/preferences";
 
-export const dynamic = "force-dynamic";
 
 // RFC 8058 one-click: a mail program POSTs "List-Unsubscribe=One-Click" to the URL of the
 // List-Unsubscribe header; the token in the URL names the subscription, no cookie is needed.

@@ -1,7 +1,6 @@
 import { listUsers } from "@/lib/accounts/queries";
 import { route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Admin only: the accounts and their roles.
 export const GET = route({ permission: "admin:users" }, async () => {

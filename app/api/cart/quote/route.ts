@@ -2,7 +2,6 @@ import { quoteCart } from "@/lib/checkout/queries/quote";
 import { quoteRequestSchema } from "@/lib/checkout/schemas";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Public: prices a cart from the database; any price or total in the body is ignored.
 export const POST = route({ public: true }, async ({ request }) => {

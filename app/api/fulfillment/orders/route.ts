@@ -3,7 +3,6 @@ import { queueParamsSchema } from "@/lib/fulfillment/queue-params";
 import { queueCsvResponse } from "@/lib/fulfillment/queue-response";
 import { parseQuery, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // The shipping desk's queue: one page as JSON, or the whole view as CSV with ?format=csv.
 export const GET = route({ permission: "fulfillment:orders" }, async ({ request }) => {

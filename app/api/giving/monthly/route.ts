@@ -3,7 +3,6 @@ import { startMonthlyGift } from "@/lib/giving/commands/monthly";
 import { startMonthlySchema } from "@/lib/giving/monthly-schemas";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Guests and signed-in donors: opens the subscription and returns its first payment's secret.
 export const POST = route({ public: true }, async ({ request }) => {

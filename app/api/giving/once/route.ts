@@ -3,7 +3,6 @@ import { startGiftOnce } from "@/lib/giving/commands/once";
 import { giveOnceSchema } from "@/lib/giving/once-schemas";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // A gift on its own with a tribute or the card fee covered; the payment is the ordinary checkout's.
 export const POST = route({ public: true }, async ({ request }) => {

@@ -1,17 +1,15 @@
 import { z } from "zod";
 import { BAND_IDS } from "@/lib/catalog/climate-bands";
-import { getHouseBySlug } from "@/lib/catalog/queries";
+import { houseForBuyer } from "@/lib/catalog/buyer-view";
+import { cachedModelOccupancy } from "@/lib/catalog/cached";
 import { AppError } from "@/lib/http/errors";
 import { parseQuery, route } from "@/lib/http/route";
-import { getModelOccupancy } from "@/lib/roost-reports/queries";
-
-export const dynamic = "force-dynamic";
 
 const querySchema = z.object({ band: z.enum(BAND_IDS, "Choose a band: cool, warm, hot or very-hot.").optional() });
 
 export const GET = route<{ slug: string }>({ public: true }, async ({ request, params }) => {
   const { band } = parseQuery(request, querySchema);
-  const house = await getHouseBySlug({ slug: params.slug, band });
+  const house = await houseForBuyer(params.slug, band);
   if (!house) throw new AppError("not_found", "No house on sale has that name.");
   return {
     slug: house.slug,
@@ -28,6 +26,6 @@ export const GET = route<{ slug: string }>({ public: true }, async ({ request, p
     publishable: house.check.publishable,
     carton: house.carton,
     ...(house.fit ? { fit: house.fit } : {}),
-    occupancy: await getModelOccupancy({ modelId: house.id }),
+    occupancy: await cachedModelOccupancy(house.id),
   };
 });

@@ -4,7 +4,6 @@ import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { getOrderHistory, getOrderLines } from "@/lib/orders/queries";
 import { route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // The buyer's view of one order (signed in as its buyer, or with its link token `?t=`).
 export const GET = route<{ id: string }>({ public: true }, async ({ request, params }) => {

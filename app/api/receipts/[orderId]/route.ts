@@ -4,7 +4,6 @@ import { getOrderReceipt } from "@/lib/checkout/queries/receipt";
 import { AppError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // The buyer (signed in, or with the order's link token `?t=`) and staff who handle orders.
 export const GET = route<{ orderId: string }>({ public: true }, async ({ request, params }) => {

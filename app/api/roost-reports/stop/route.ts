@@ -3,7 +3,6 @@ import { parseQuery, route } from "@/lib/http/route";
 import { stopFromLink } from "@/lib/roost-reports/link-answers";
 import { optOutSchema } from "@/lib/roost-reports/report-input";
 
-export const dynamic = "force-dynamic";
 
 // RFC 8058 one-click: a mail program POSTs "List-Unsubscribe=One-Click" to the header's URL; the
 // signed token in it names the order and address, so no cookie is needed.

@@ -6,7 +6,6 @@ import { deleteSiteForViewer } from "@/lib/placement/commands";
 import { getSiteForViewer } from "@/lib/placement/queries";
 import type { SiteViewer } from "@/lib/placement/sites";
 
-export const dynamic = "force-dynamic";
 
 type Params = { id: string };
 

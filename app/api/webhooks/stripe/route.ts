@@ -3,7 +3,6 @@ import { verifyWebhook } from "@/lib/checkout/payments";
 import { processPaymentEvent, RetryLater } from "@/lib/checkout/commands/webhooks";
 import { gated } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Public, but only genuine deliveries count: the signature is checked on the raw body, and an
 // unsigned, tampered or older-than-300-s delivery is refused with 400 and no write.

@@ -14,6 +14,9 @@ import { managePath } from "@/lib/giving/manage-link";
 import { findDedicationForMonthly, getCenterTimeZone, listMonthlyGiftPayments } from "@/lib/giving/queries";
 import { AppError } from "@/lib/http/errors";
 
+// A private page, opened by its own link or token: rendered per request, and it may wait for its data.
+export const instant = false;
+
 export const metadata: Metadata = { title: "Your monthly gift", robots: { index: false } };
 
 type Props = { params: Promise<{ id: string }>; searchParams: Promise<{ s?: string }> };

@@ -14,6 +14,9 @@ import { formatCenterDate } from "@/lib/giving/center-time";
 import { dedicationLines } from "@/lib/giving/dedication-words";
 import { findDedicationForOrder } from "@/lib/giving/queries";
 
+// A private page, opened by its own link or token: rendered per request, and it may wait for its data.
+export const instant = false;
+
 export const metadata: Metadata = { title: "Receipt" };
 
 type Props = { params: Promise<{ id: string }>; searchParams: Promise<{ t?: string }> };

@@ -3,7 +3,6 @@ import { csvResponse, salesCsv } from "@/lib/reports/csv";
 import { loadFigures, loadReportRange } from "@/lib/reports/queries";
 import { z } from "zod";
 
-export const dynamic = "force-dynamic";
 
 const query = z.object({ from: z.string().max(10).optional(), to: z.string().max(10).optional() });
 

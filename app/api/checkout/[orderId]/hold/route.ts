@@ -4,7 +4,6 @@ import { getOrderForViewer } from "@/lib/checkout/queries/order-access";
 import { holdForPayment } from "@/lib/checkout/commands/orders";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 const bodySchema = z.object({ token: z.string().max(200).optional() });
 

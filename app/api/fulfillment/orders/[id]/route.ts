@@ -2,7 +2,6 @@ import { getFulfillmentOrder } from "@/lib/fulfillment/queries/order-detail";
 import { AppError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // One order as the shipping desk sees it: houses, cartons, boxes, history and its version.
 export const GET = route<{ id: string }>({ permission: "fulfillment:orders" }, async ({ params }) => {

@@ -3,7 +3,6 @@ import { changeMonthlyAmount, monthlyGiftForDonor, stopMonthlyGift } from "@/lib
 import { changeMonthlySchema, stopMonthlySchema } from "@/lib/giving/monthly-schemas";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // The donor only: signed in as the gift's donor, or with the private link's token in the body.
 // Anyone else gets 404, as if the gift did not exist.

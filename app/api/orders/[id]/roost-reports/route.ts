@@ -1,4 +1,5 @@
 import { getSessionUser } from "@/lib/auth/session";
+import { expireOccupancy } from "@/lib/catalog/expire";
 import { AppError, badInput } from "@/lib/http/errors";
 import { gateValue } from "@/lib/http/input-gate";
 import { route } from "@/lib/http/route";
@@ -6,8 +7,6 @@ import { reportFromOrderPage } from "@/lib/roost-reports/order-reports";
 import { houseReportSchema } from "@/lib/roost-reports/report-input";
 import { readLimitedBody } from "@/lib/uploads/read-limited-body";
 import { MAX_UPLOAD_BYTES } from "@/lib/uploads/upload-rules";
-
-export const dynamic = "force-dynamic";
 
 // Room for the boundaries and the text fields around a photo at the limit; the photo itself is
 // measured exactly afterwards (lib/uploads).
@@ -55,5 +54,6 @@ export const POST = route<{ id: string }>({ public: true }, async ({ request, pa
     input: parsed.data,
     photo,
   });
+  expireOccupancy("route");
   return Response.json(result, { status: result.outcome === "recorded" ? 201 : 200 });
 });

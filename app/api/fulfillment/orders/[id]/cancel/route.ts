@@ -2,7 +2,6 @@ import { cancelOrder } from "@/lib/fulfillment/commands/admin-refunds";
 import { cancelSchema } from "@/lib/fulfillment/schemas";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Admin: cancel an order that has not left, refund it in full and put its houses back in stock.
 export const POST = route<{ id: string }>({ permission: "admin:refunds" }, async ({ request, params, user }) => {

@@ -2,7 +2,6 @@ import { packSchema } from "@/lib/fulfillment/schemas";
 import { packOrder } from "@/lib/fulfillment/commands/transitions";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Records the boxes (billable weight computed on the server) and marks the order boxed and weighed.
 export const POST = route<{ id: string }>({ permission: "fulfillment:orders" }, async ({ request, params, user }) => {

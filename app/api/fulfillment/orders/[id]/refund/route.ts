@@ -2,7 +2,6 @@ import { refundShippedOrder } from "@/lib/fulfillment/commands/admin-refunds";
 import { dollarsToCents, refundSchema } from "@/lib/fulfillment/schemas";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Admin: refund a shipped or collected order, all or part, without taking stock back.
 export const POST = route<{ id: string }>({ permission: "admin:refunds" }, async ({ request, params, user }) => {

@@ -2,7 +2,6 @@ import { transitionSchema } from "@/lib/fulfillment/schemas";
 import { transitionOrder } from "@/lib/fulfillment/commands/transitions";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // One step forward, or an admin's correction one step back with a reason (checked by the state machine).
 export const POST = route<{ id: string }>({ permission: "fulfillment:orders" }, async ({ request, params, user }) => {

@@ -1,3 +1,4 @@
+import { expireModel } from "@/lib/catalog/expire";
 import { AppError, badInput } from "@/lib/http/errors";
 import { gateValue } from "@/lib/http/input-gate";
 import { route } from "@/lib/http/route";
@@ -7,7 +8,6 @@ import { addModelPhoto } from "@/lib/staff/commands/photos";
 import { readLimitedBody } from "@/lib/uploads/read-limited-body";
 import { MAX_UPLOAD_BYTES } from "@/lib/uploads/upload-rules";
 
-export const dynamic = "force-dynamic";
 
 // Room for the multipart boundaries, the alt text and the file name around a file at the limit;
 // the file itself is measured exactly after parsing.
@@ -62,6 +62,7 @@ export const POST = route<{ slug: string }>(
       fileName: fields.data.fileName,
       altText: fields.data.altText,
     });
+    await expireModel(photo.modelId, "details", "route");
     return Response.json({ photo }, { status: 201 });
   },
 );

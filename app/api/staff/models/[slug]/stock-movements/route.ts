@@ -2,7 +2,6 @@ import { AppError } from "@/lib/http/errors";
 import { route } from "@/lib/http/route";
 import { getStaffModelBySlug, listStockMovements } from "@/lib/staff/queries/model";
 
-export const dynamic = "force-dynamic";
 
 // One model's stock ledger, newest first.
 export const GET = route<{ slug: string }>({ permission: "staff:stock" }, async ({ params }) => {

@@ -3,7 +3,6 @@ import { route } from "@/lib/http/route";
 import { parseReportPhotoKey } from "@/lib/roost-reports/photo-keys";
 import { getImage } from "@/lib/uploads/object-store";
 
-export const dynamic = "force-dynamic";
 
 // Buyers' report photos may show their house or yard: staff and admin only, never cached by a
 // shared cache, and only keys of the shape the server makes.

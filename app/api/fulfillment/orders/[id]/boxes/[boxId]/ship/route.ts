@@ -2,7 +2,6 @@ import { shipBoxSchema } from "@/lib/fulfillment/schemas";
 import { shipBox } from "@/lib/fulfillment/commands/transitions";
 import { parseJson, route } from "@/lib/http/route";
 
-export const dynamic = "force-dynamic";
 
 // Hands one box to a carrier; the order is shipped when its last box is.
 export const POST = route<{ id: string; boxId: string }>({ permission: "fulfillment:orders" }, async ({ request, params, user }) => {
