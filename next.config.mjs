@@ -9,6 +9,8 @@ const nextConfig = {
   // catalog's reads are cached and tagged ("use cache", lib/catalog/cached.ts). The build never
   // touches the database: cached data is read at request time (after `connection()`), then kept.
   cacheComponents: true,
+  // A link prefetches its route's prerendered shell (one per route), not each page's data.
+  partialPrefetching: true,
   typescript: { ignoreBuildErrors: false },
   // The title and description (the center's name, read from its settings) go in <head> for every
   // visitor, not streamed in after the page: a screen reader announces the page by its title as
