@@ -1,3 +1,5 @@
+import { fileURLToPath } from "node:url";
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // PGlite ships a wasm bundle; bundling it breaks at run time (see DEVELOPERS.md, "Traps").
@@ -9,8 +11,15 @@ const nextConfig = {
   // catalog's reads are cached and tagged ("use cache", lib/catalog/cached.ts). The build never
   // touches the database: cached data is read at request time (after `connection()`), then kept.
   cacheComponents: true,
-  // A link prefetches its route's prerendered shell (one per route), not each page's data.
-  partialPrefetching: true,
+  // The framework's in-memory "use cache" store, plus invalidations shared through PostgreSQL
+  // when several instances run on one server (lib/cache/shared-tags-handler.mjs).
+  cacheHandlers: { default: fileURLToPath(new URL("./lib/cache/shared-tags-handler.mjs", import.meta.url)) },
+  experimental: {
+    // Off: with it on (the default in 16.4), a client-side navigation between two pages of one
+    // dynamic route (/houses/a → /houses/b, two orders at the shipping desk) could show the first
+    // page's content under the second's address. DEVELOPERS.md, Traps.
+    varyParams: false,
+  },
   typescript: { ignoreBuildErrors: false },
   // The title and description (the center's name, read from its settings) go in <head> for every
   // visitor, not streamed in after the page: a screen reader announces the page by its title as

@@ -641,3 +641,22 @@ export const giftDedications = pgTable(
 
 export type MonthlyGiftRow = typeof monthlyGifts.$inferSelect;
 export type GiftDedicationRow = typeof giftDedications.$inferSelect;
+
+/**
+ * Cache invalidations shared by every app instance on one PostgreSQL server: each row is one
+ * `updateTag`/`revalidateTag` made by one instance; the others read the rows they have not seen and
+ * expire the same tags in their own memory (lib/cache/shared-tags-handler.mjs). Rows older than the
+ * longest cache lifetime are deleted. Unused on the embedded database (one process, nothing to share).
+ */
+export const cacheTagEvents = pgTable(
+  "cache_tag_events",
+  {
+    id: serial("id").primaryKey(),
+    tags: text("tags").array().notNull(),
+    // Seconds until the tags expire (revalidateTag's profile); null expires them at once (updateTag).
+    expireSeconds: integer("expire_seconds"),
+    instance: text("instance").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true, mode: "date" }).notNull().defaultNow(),
+  },
+  (t) => [index("cache_tag_events_created").on(t.createdAt)],
+);

@@ -12,7 +12,8 @@ import { FormError } from "@/components/ui/form-error";
 import { signInFormAction } from "@/lib/auth/actions";
 import { signInSchema, type SignIn } from "@/lib/auth/password-policy";
 
-export function SignInForm({ next }: { next: string }) {
+/** `notice`: what the page says after a post without script was refused (lib/auth/form-notices.ts). */
+export function SignInForm({ next, notice = null }: { next: string; notice?: string | null }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   // Without script the browser posts the form to this server action (the fields in the body,
@@ -34,7 +35,7 @@ export function SignInForm({ next }: { next: string }) {
 
   return (
     <form action={postAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <FormError message={error ?? (posted && !posted.ok ? posted.error.message : null)} />
+      <FormError message={error ?? (posted && !posted.ok ? posted.error.message : notice)} />
       <input type="hidden" name="next" value={next} />
       <Field label="E-mail" error={errors.email?.message} required>
         <Input type="email" autoComplete="email" {...form.register("email")} />

@@ -13,7 +13,8 @@ import { FormError } from "@/components/ui/form-error";
 import { Input } from "@/components/ui/input";
 import { PASSWORD_MIN, signUpSchema, type SignUp } from "@/lib/auth/password-policy";
 
-export function SignUpForm({ next }: { next: string }) {
+/** `notice`: what the page says after a post without script was refused (lib/auth/form-notices.ts). */
+export function SignUpForm({ next, notice = null }: { next: string; notice?: string | null }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   // Without script the browser posts the form to this server action (never a GET with the
@@ -40,7 +41,7 @@ export function SignUpForm({ next }: { next: string }) {
 
   return (
     <form action={postAction} onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
-      <FormError message={error ?? (posted && !posted.ok ? posted.error.message : null)} />
+      <FormError message={error ?? (posted && !posted.ok ? posted.error.message : notice)} />
       <input type="hidden" name="next" value={next} />
       <Field label="Your name" error={errors.name?.message ?? postedFields.name} required>
         <Input autoComplete="name" {...form.register("name")} />

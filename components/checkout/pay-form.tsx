@@ -1,7 +1,7 @@
 "use client";
 
 import { Elements, PaymentElement, useElements, useStripe } from "@stripe/react-stripe-js";
-import { loadStripe, type Stripe } from "@stripe/stripe-js";
+import { loadPaymentsSdk } from "@/lib/checkout/payments-browser";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
@@ -10,21 +10,15 @@ import { cartActions } from "@/lib/checkout/cart-store";
 import { fetchJson, isApiError } from "@/lib/http/client";
 import { formatUsd } from "@/lib/checkout/money";
 
-let stripePromise: Promise<Stripe | null> | null = null;
-function getStripe(publishableKey: string) {
-  stripePromise ??= loadStripe(publishableKey);
-  return stripePromise;
-}
-
 const appearance = {
   theme: "stripe" as const,
   variables: { colorPrimary: "#2f5a45", colorText: "#1c2420", fontSizeBase: "17px", borderRadius: "8px" },
 };
 
 /** Card payment with the payment SDK's own Elements; the amount was fixed by the server. */
-export function PayForm(props: { orderId: string; token: string; clientSecret: string; publishableKey: string; totalCents: number; returnUrl: string }) {
+export function PayForm(props: { orderId: string; token: string; clientSecret: string; publishableKey: string; standInScript: string | null; totalCents: number; returnUrl: string }) {
   return (
-    <Elements stripe={getStripe(props.publishableKey)} options={{ clientSecret: props.clientSecret, appearance }}>
+    <Elements stripe={loadPaymentsSdk(props.publishableKey, props.standInScript)} options={{ clientSecret: props.clientSecret, appearance }}>
       <PayInner {...props} />
     </Elements>
   );

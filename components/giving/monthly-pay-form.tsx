@@ -1,18 +1,12 @@
 "use client";
 
 import { Elements, PaymentElement, useElements, useStripe } from "@stripe/react-stripe-js";
-import { loadStripe, type Stripe } from "@stripe/stripe-js";
+import { loadPaymentsSdk } from "@/lib/checkout/payments-browser";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/form-error";
 import { formatUsd } from "@/lib/checkout/money";
-
-let stripePromise: Promise<Stripe | null> | null = null;
-function getStripe(publishableKey: string) {
-  stripePromise ??= loadStripe(publishableKey);
-  return stripePromise;
-}
 
 const appearance = {
   theme: "stripe" as const,
@@ -20,9 +14,9 @@ const appearance = {
 };
 
 /** Pays a monthly gift's open invoice (the first one, or one whose renewal failed) with the payment SDK's own form. */
-export function MonthlyPayForm(props: { clientSecret: string; publishableKey: string; amountCents: number; returnUrl: string; label: string }) {
+export function MonthlyPayForm(props: { clientSecret: string; publishableKey: string; standInScript: string | null; amountCents: number; returnUrl: string; label: string }) {
   return (
-    <Elements stripe={getStripe(props.publishableKey)} options={{ clientSecret: props.clientSecret, appearance }}>
+    <Elements stripe={loadPaymentsSdk(props.publishableKey, props.standInScript)} options={{ clientSecret: props.clientSecret, appearance }}>
       <Inner {...props} />
     </Elements>
   );

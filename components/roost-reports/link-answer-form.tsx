@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { Select } from "@/components/ui/select";
 import { Textarea } from "@/components/ui/textarea";
-import { confirmLinkAnswerAction } from "@/lib/roost-reports/actions";
+import { fetchJson, isApiError } from "@/lib/http/client";
 import { COUNT_BAND_WORDS, COUNT_BANDS, type RoostAnswer } from "@/lib/roost-reports/answers";
 import { MAX_NOTE_CHARS } from "@/lib/roost-reports/report-input";
 
@@ -15,6 +15,8 @@ const DONE_WORDS = {
   changed: "Thank you: your answer is changed.",
   unchanged: "That was already your answer; nothing changed.",
 } as const;
+
+type Answered = { outcome: keyof typeof DONE_WORDS; others: { answer: RoostAnswer; label: string; href: string }[]; orderPath: string | null };
 
 type Done =
   | { ok: true; text: string; others: { answer: RoostAnswer; label: string; href: string }[]; orderPath: string | null }
@@ -29,17 +31,22 @@ export function LinkAnswerForm({ token, answer }: { token: string; answer: Roost
     event.preventDefault();
     const form = new FormData(event.currentTarget);
     setBusy(true);
-    const result = await confirmLinkAnswerAction({
-      token,
-      countBand: (form.get("countBand") as string | null) ?? undefined,
-      note: (form.get("note") as string | null) ?? "",
-    });
-    setBusy(false);
-    setDone(
-      result.ok
-        ? { ok: true, text: DONE_WORDS[result.data.outcome], others: result.data.others, orderPath: result.data.orderPath }
-        : { ok: false, text: result.error.message },
-    );
+    try {
+      const answered = await fetchJson<Answered>("/api/roost-reports/answer", {
+        json: {
+          token,
+          countBand: (form.get("countBand") as string | null) ?? undefined,
+          note: (form.get("note") as string | null) ?? "",
+        },
+        fallbackMessage: "We could not record the answer just now. Please try again.",
+      });
+      setDone({ ok: true, text: DONE_WORDS[answered.outcome], others: answered.others, orderPath: answered.orderPath });
+    } catch (error) {
+      if (!isApiError(error)) throw error;
+      setDone({ ok: false, text: error.message });
+    } finally {
+      setBusy(false);
+    }
   }
 
   return (

@@ -7,6 +7,7 @@ import { signUpAction } from "@/lib/accounts/actions";
 import { action, formFields, type ActionResult } from "@/lib/http/action";
 import { AppError } from "@/lib/http/errors";
 import { authenticate, clientAddress, SignInRefused } from "./credentials";
+import { signInNoticeFor } from "./form-notices";
 import { safeNext } from "./safe-next";
 import { startSession } from "./session-cookie";
 
@@ -35,16 +36,20 @@ const signInForm = action(
   },
 );
 
+// A refusal answers with a redirect to the page and a notice code (lib/auth/form-notices.ts): a
+// prerendered page cannot show an action's state to a browser without script.
 export async function signInFormAction(_previous: ActionResult<{ next: string }> | null, form: FormData): Promise<ActionResult<{ next: string }>> {
-  const result = await signInForm(formFields(form));
+  const fields = formFields(form);
+  const result = await signInForm(fields);
   if (result.ok) redirect(result.data.next);
-  return result;
+  const next = safeNext(typeof fields.next === "string" ? fields.next : undefined, "/welcome");
+  redirect(`/sign-in?notice=${signInNoticeFor(result.error.message)}&next=${encodeURIComponent(next)}`);
 }
 
 export async function signUpFormAction(_previous: ActionResult<{ next: string }> | null, form: FormData): Promise<ActionResult<{ next: string }>> {
   const fields = formFields(form);
   const created = await signUpAction({ name: fields.name, email: fields.email, password: fields.password });
-  if (!created.ok) return created;
+  if (!created.ok) redirect(`/sign-up?notice=sign-up-refused&next=${encodeURIComponent(safeNext(typeof fields.next === "string" ? fields.next : undefined, "/account"))}`);
   const signedIn = await signInForm({ email: fields.email, password: fields.password, next: fields.next });
   redirect(signedIn.ok ? safeNext(fields.next, "/account") : "/sign-in");
 }

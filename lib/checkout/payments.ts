@@ -29,3 +29,13 @@ export function verifyWebhook(rawBody: string, signature: string | null): Stripe
   if (!signature) throw new Error("No Stripe-Signature header.");
   return getPayments().webhooks.constructEvent(rawBody, signature, env().STRIPE_WEBHOOK_SECRET, 300);
 }
+
+/**
+ * The stand-in's browser script for the pages that take a card, or null against the real service
+ * (whose SDK loads its own script). See lib/checkout/payments-browser.ts.
+ */
+export function standInBrowserScript(): string | null {
+  const settings = env();
+  if (!settings.useStandIns || !settings.STRIPE_API_BASE) return null;
+  return `${settings.STRIPE_API_BASE.replace(/\/+$/, "")}/stripe.js`;
+}

@@ -1,6 +1,7 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { redirect } from "next/navigation";
 import { z } from "zod";
 import { action, formAction } from "@/lib/http/action";
 import { preferencesSchema, unsubscribeSchema, yearEndRequestSchema } from "@/lib/mail/account-schemas";
@@ -69,9 +70,13 @@ export const resendMailAction = action(
 );
 
 // The same two actions answering a plain form post, for a page whose script has not run.
+// The request answers with a redirect to a page of its own: /forgot-password is prerendered, and a
+// browser without script would not see the action's state in it.
 const forgotPasswordForm = formAction(forgotPasswordAction);
-export async function forgotPasswordFormAction(...args: Parameters<typeof forgotPasswordForm>) {
-  return forgotPasswordForm(...args);
+export async function forgotPasswordFormAction(...args: Parameters<typeof forgotPasswordForm>): ReturnType<typeof forgotPasswordForm> {
+  const result = await forgotPasswordForm(...args);
+  if (result.ok) redirect("/forgot-password/sent");
+  return result;
 }
 const resetPasswordForm = formAction(resetPasswordAction);
 export async function resetPasswordFormAction(...args: Parameters<typeof resetPasswordForm>) {

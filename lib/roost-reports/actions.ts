@@ -4,15 +4,8 @@ import { revalidatePath } from "next/cache";
 import { expireOccupancy } from "@/lib/catalog/expire";
 import { action } from "@/lib/http/action";
 import { reviewRoostReport } from "./commands";
-import { answerFromLink, stopFromLink } from "./link-answers";
-import { linkAnswerSchema, optOutSchema, reviewSchema } from "./report-input";
-
-/** The confirmation page's button: public, the signed token is the authority. */
-export const confirmLinkAnswerAction = action({ public: true }, linkAnswerSchema, async (input) => {
-  const answered = await answerFromLink({ input });
-  expireOccupancy("action");
-  return answered;
-});
+import { stopFromLink } from "./link-answers";
+import { optOutSchema, reviewSchema } from "./report-input";
 
 export const stopRoostQuestionsAction = action({ public: true }, optOutSchema, async ({ token }) => {
   const { email } = await stopFromLink({ token });

@@ -78,18 +78,20 @@ test("every staff change a buyer sees shows on the buyer's next request", async 
   await expect(page.getByTestId("stock-on-hand")).toHaveText(String(stocked));
   expect((await buyerView(buyer, slug)).card?.stock).toBe(stocked);
 
-  // Inspection: a built unit measured today, exactly as listed.
-  const inspectedBefore = (await warm(buyer, slug)).detail!.certification.inspectedOn;
-  await page.goto(`/staff/models/${slug}/inspections`);
+  // Inspection: a built unit measured today, exactly as listed. On another model: an inspection
+  // cannot be taken back, and the workshop spec expects this one's to fall due.
+  const inspectSlug = "sparrowgate-single";
+  const inspectedBefore = (await warm(buyer, inspectSlug)).detail!.certification.inspectedOn;
+  await page.goto(`/staff/models/${inspectSlug}/inspections`);
   await field(page, "Measured chamber gap").fill("3/4");
-  await field(page, "Measured chamber height").fill("24");
-  await field(page, "Measured chamber width").fill("16");
-  await field(page, "Measured landing area").fill("5");
+  await field(page, "Measured chamber height").fill("22");
+  await field(page, "Measured chamber width").fill("14");
+  await field(page, "Measured landing area").fill("4");
   await field(page, "Inside surface as built").selectOption("grooved");
   await page.getByLabel("Seams are sealed on the built unit").check();
   await page.getByRole("button", { name: "Record inspection" }).click();
   await expect(page.getByText("Passed: recorded in the history below")).toBeVisible();
-  const inspected = await buyerView(buyer, slug);
+  const inspected = await buyerView(buyer, inspectSlug);
   expect(inspected.detail?.certification.inspectedOn).not.toBe(inspectedBefore);
   expect(Date.parse(inspected.detail!.certification.inspectedOn!)).toBeGreaterThan(Date.parse(inspectedBefore!));
 

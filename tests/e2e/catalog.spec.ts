@@ -91,3 +91,17 @@ test("on a phone the filters fold behind a button with the count of active filte
   await expect(page.getByRole("form", { name: "Filter houses" })).toBeVisible();
   await expect(page.getByRole("button", { name: /^Filters/ })).toBeHidden();
 });
+
+test("each house card opens its own house when the page moves without reloading", async ({ page, request }) => {
+  // Client-side navigations between pages of one dynamic route once showed the first house's page
+  // under the next one's address (next.config.mjs, experimental.varyParams).
+  const { items } = (await (await request.get("/api/houses")).json()) as { items: { slug: string; name: string }[] };
+  expect(items.length).toBeGreaterThanOrEqual(3);
+  for (const house of items.slice(0, 4)) {
+    await page.goto("/houses");
+    await page.waitForLoadState("networkidle");
+    await page.getByRole("main").locator(`a[href='/houses/${house.slug}']`).first().click();
+    await page.waitForURL((url) => url.pathname === `/houses/${house.slug}`);
+    await expect(page.getByRole("heading", { level: 1 })).toHaveText(house.name);
+  }
+});

@@ -4,6 +4,7 @@ import { redirect } from "next/navigation";
 import { Suspense } from "react";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { PageHeader, PageShell } from "@/components/page-header";
+import { formNotice } from "@/lib/auth/form-notices";
 import { getSessionUser } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Sign in" };
@@ -34,7 +35,7 @@ async function SignInBody({ searchParams }: { searchParams: SearchParams }) {
   if (await getSessionUser()) redirect(next);
   return (
     <>
-      <SignInForm next={next} />
+      <SignInForm next={next} notice={formNotice(params.notice)} />
       <p className="mt-6 text-ink-soft">
         New here?{" "}
         <Link className="font-bold text-moss-800 underline" href={`/sign-up?next=${encodeURIComponent(next)}`}>

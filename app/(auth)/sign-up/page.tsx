@@ -3,6 +3,7 @@ import { redirect } from "next/navigation";
 import { Suspense } from "react";
 import { SignUpForm } from "@/components/auth/sign-up-form";
 import { PageHeader, PageShell } from "@/components/page-header";
+import { formNotice } from "@/lib/auth/form-notices";
 import { getSessionUser } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Create an account" };
@@ -25,8 +26,8 @@ export default function SignUpPage({ searchParams }: { searchParams: SearchParam
 }
 
 async function SignUpBody({ searchParams }: { searchParams: SearchParams }) {
-  const { next } = await searchParams;
+  const { next, notice } = await searchParams;
   const target = typeof next === "string" && next.startsWith("/") && !next.startsWith("//") ? next : "/account";
   if (await getSessionUser()) redirect(target);
-  return <SignUpForm next={target} />;
+  return <SignUpForm next={target} notice={formNotice(notice)} />;
 }

@@ -1,9 +1,11 @@
-import { NextResponse } from "next/server";
+import { connection, NextResponse } from "next/server";
 import { pingDatabase } from "@/lib/health/queries";
 
 
 // Public: load balancers probe it. It says whether the database answers, nothing more.
 export async function GET() {
+  // Asked at request time, never answered once at build.
+  await connection();
   try {
     const { kind, latencyMs } = await pingDatabase();
     return NextResponse.json({ status: "ok", database: { state: "up", kind, latencyMs } });

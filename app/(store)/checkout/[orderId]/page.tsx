@@ -9,7 +9,7 @@ import { getSessionUser } from "@/lib/auth/session";
 import { getOrderForViewer } from "@/lib/checkout/queries/order-access";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { getOrderLines } from "@/lib/orders/queries";
-import { getPayments } from "@/lib/checkout/payments";
+import { getPayments, standInBrowserScript } from "@/lib/checkout/payments";
 import { OrderLineList } from "@/components/orders/order-line-list";
 import { env } from "@/lib/config/env";
 import { AppError } from "@/lib/http/errors";
@@ -73,6 +73,7 @@ export default async function CheckoutPage({ params, searchParams }: Props) {
             token={order.accessToken}
             clientSecret={intent.client_secret ?? ""}
             publishableKey={settings.STRIPE_PUBLISHABLE_KEY}
+                standInScript={standInBrowserScript()}
             totalCents={order.totalCents}
             returnUrl={`${settings.APP_URL}${orderUrl}`}
           />

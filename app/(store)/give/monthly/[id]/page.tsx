@@ -7,6 +7,7 @@ import { ButtonLink } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { getSessionUser } from "@/lib/auth/session";
 import { formatUsd } from "@/lib/checkout/money";
+import { standInBrowserScript } from "@/lib/checkout/payments";
 import { env } from "@/lib/config/env";
 import { formatCenterDate } from "@/lib/giving/center-time";
 import { monthlyGiftForDonor, openInvoiceSecret } from "@/lib/giving/commands/monthly";
@@ -88,6 +89,7 @@ export default async function MonthlyGiftPage({ params, searchParams }: Props) {
               <MonthlyPayForm
                 clientSecret={open.clientSecret}
                 publishableKey={settings.STRIPE_PUBLISHABLE_KEY}
+                standInScript={standInBrowserScript()}
                 amountCents={open.amountCents}
                 returnUrl={`${settings.APP_URL}${selfPath}`}
                 label={gift.status === "pending" ? "Give" : "Pay"}
