@@ -12,8 +12,8 @@ const nextConfig = {
   // touches the database: cached data is read at request time (after `connection()`), then kept.
   cacheComponents: true,
   // The framework's in-memory "use cache" store, plus invalidations shared through PostgreSQL
-  // when several instances run on one server (lib/cache/shared-tags-handler.mjs).
-  cacheHandlers: { default: fileURLToPath(new URL("./lib/cache/shared-tags-handler.mjs", import.meta.url)) },
+  // when several instances run on one server (lib/caching/shared-tags-handler.mjs).
+  cacheHandlers: { default: fileURLToPath(new URL("./lib/caching/shared-tags-handler.mjs", import.meta.url)) },
   experimental: {
     // Off: with it on (the default in 16.4), a client-side navigation between two pages of one
     // dynamic route (/houses/a → /houses/b, two orders at the shipping desk) could show the first

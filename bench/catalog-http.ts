@@ -10,7 +10,8 @@
  * answers without rendering) is the baseline; `/houses`, a model page and `GET /api/houses` are printed
  * with their requests per second, p97.5 latency, and the ratio of their requests per second to the
  * baseline's in the same run.
- * Part 2, first-load script per route: every `<script src>` of the page's HTML under `/_next/`, fetched
+ * Part 2, first-load script per route: every `<script src>` of the page's HTML under `/_next/` (not
+ * the `noModule` polyfills, which a current browser skips), fetched
  * and gzip-compressed here (level 9 is close to what a CDN serves), summed; the same figure the build
  * used to print as "First Load JS".
  * Part 3, with `--lighthouse`: Lighthouse (mobile defaults) against Debian's chromium
@@ -62,7 +63,9 @@ async function load(pathname: string): Promise<Load> {
 
 async function firstLoadScript(pathname: string): Promise<{ files: number; raw: number; gzip: number }> {
   const html = await (await fetch(`${base}${pathname}`)).text();
-  const srcs = [...new Set([...html.matchAll(/<script[^>]+src="([^"]+)"/g)].map((m) => m[1]!).filter((s) => s.startsWith("/_next/")))];
+  // `noModule` scripts (the framework's polyfills) are never fetched by a browser that runs modules.
+  const tags = [...html.matchAll(/<script[^>]+>/g)].map((m) => m[0]).filter((tag) => !/\snoModule/i.test(tag));
+  const srcs = [...new Set(tags.map((tag) => /src="([^"]+)"/.exec(tag)?.[1] ?? "").filter((s) => s.startsWith("/_next/")))];
   let raw = 0;
   let gzip = 0;
   for (const src of srcs) {

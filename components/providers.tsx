@@ -1,17 +1,9 @@
 "use client";
 
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { useState, type ReactNode } from "react";
+import type { ReactNode } from "react";
 import { ToastProvider } from "@/components/ui/toast";
 
-/** Client-side providers: TanStack Query for data fetching, and toasts. */
+/** Client-side providers for every page: toasts. (Data fetching wraps itself: components/with-queries.tsx.) */
 export function Providers({ children }: { children: ReactNode }) {
-  const [queryClient] = useState(
-    () => new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, refetchOnWindowFocus: false } } }),
-  );
-  return (
-    <QueryClientProvider client={queryClient}>
-      <ToastProvider>{children}</ToastProvider>
-    </QueryClientProvider>
-  );
+  return <ToastProvider>{children}</ToastProvider>;
 }

@@ -2,12 +2,12 @@
 
 import Link from "next/link";
 import { usePathname } from "next/navigation";
-import { signOut } from "next-auth/react";
 import { Suspense, useEffect, useRef, useState, type KeyboardEvent, type RefObject } from "react";
 
 import { Wordmark } from "@/components/brand/wordmark";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { cn } from "@/components/ui/cn";
+import { signOutInBrowser } from "@/lib/auth/sign-out-browser";
 import { isRole, ROLE_LABELS } from "@/lib/auth/roles";
 
 type HeaderUser = { name: string; role: string };
@@ -135,7 +135,9 @@ function SignOutButton() {
       loading={busy}
       onClick={() => {
         setBusy(true);
-        void signOut({ callbackUrl: "/" });
+        void signOutInBrowser("/").then((left) => {
+          if (!left) setBusy(false);
+        });
       }}
     >
       Sign out

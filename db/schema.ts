@@ -645,7 +645,7 @@ export type GiftDedicationRow = typeof giftDedications.$inferSelect;
 /**
  * Cache invalidations shared by every app instance on one PostgreSQL server: each row is one
  * `updateTag`/`revalidateTag` made by one instance; the others read the rows they have not seen and
- * expire the same tags in their own memory (lib/cache/shared-tags-handler.mjs). Rows older than the
+ * expire the same tags in their own memory (lib/caching/shared-tags-handler.mjs). Rows older than the
  * longest cache lifetime are deleted. Unused on the embedded database (one process, nothing to share).
  */
 export const cacheTagEvents = pgTable(

@@ -1,8 +1,8 @@
 "use client";
 
-import { signOut } from "next-auth/react";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import { signOutInBrowser } from "@/lib/auth/sign-out-browser";
 
 export function SignOutButton() {
   const [busy, setBusy] = useState(false);
@@ -12,7 +12,9 @@ export function SignOutButton() {
       loading={busy}
       onClick={() => {
         setBusy(true);
-        void signOut({ callbackUrl: "/" });
+        void signOutInBrowser("/").then((left) => {
+          if (!left) setBusy(false);
+        });
       }}
     >
       Sign out

@@ -9,7 +9,7 @@ import { Field } from "@/components/ui/field";
 import { Input } from "@/components/ui/input";
 import { Select } from "@/components/ui/select";
 import { Table, TBody, Td, Th, THead, Tr } from "@/components/ui/table";
-import { SHADE_LABELS, type Shade } from "@/lib/catalog/spec";
+import { SHADE_LABELS, type Shade } from "@/lib/catalog/spec-words";
 import { bandChoiceFromClimate, writeBandChoice } from "@/lib/climate/band-cookie";
 import type { Climate } from "@/lib/climate/resolve";
 import { MONTH_WORDS } from "@/lib/climate/warmest-month";

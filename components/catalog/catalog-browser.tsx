@@ -1,7 +1,7 @@
 "use client";
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Alert } from "@/components/ui/alert";
 import { getButtonClasses } from "@/components/ui/button";
 import { Checkbox } from "@/components/ui/checkbox";
@@ -9,11 +9,13 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { Select } from "@/components/ui/select";
 import { Spinner } from "@/components/ui/spinner";
 import { fetchJson } from "@/lib/http/client";
-import { catalogQueryToParams, type CatalogQuery } from "@/lib/catalog/catalog-query";
+import type { CatalogQuery } from "@/lib/catalog/catalog-query";
+import { catalogQueryToParams } from "@/lib/catalog/catalog-query-params";
 import { BAND_IDS, CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-bands";
 import type { HouseCard as HouseCardData } from "@/lib/catalog/house-card";
-import { bandChoiceFromList, readBandChoiceInBrowser, writeBandChoice } from "@/lib/climate/band-cookie";
+import { bandChoiceFromList, writeBandChoice, type BandChoice } from "@/lib/climate/band-cookie";
 import { HouseCard } from "./house-card";
+import { WithQueries } from "@/components/with-queries";
 
 type Result = { items: HouseCardData[]; total: number };
 
@@ -29,8 +31,12 @@ export function activeFilterCount(query: CatalogQuery): number {
 }
 
 /** The catalog's filters and results; the first page arrives rendered by the server. */
-export function CatalogBrowser({ initialQuery, initialResult }: { initialQuery: CatalogQuery; initialResult: Result }) {
+type Props = { initialQuery: CatalogQuery; initialResult: Result; bandChoice: BandChoice | null };
+
+/** `bandChoice`: the band cookie as the server read it (the browser keeps it from there). */
+function CatalogBrowserWithData({ initialQuery, initialResult, bandChoice }: Props) {
   const [query, setQuery] = useState<CatalogQuery>(initialQuery);
+  const choice = useRef(bandChoice);
   const { data, isFetching, error } = useQuery({
     queryKey: ["houses", catalogQueryToParams(query).toString()],
     queryFn: () => fetchHouses(query),
@@ -42,7 +48,10 @@ export function CatalogBrowser({ initialQuery, initialResult }: { initialQuery: 
   useEffect(() => {
     const params = catalogQueryToParams(query).toString();
     window.history.replaceState(null, "", params ? `/houses?${params}` : "/houses");
-    if (query.band) writeBandChoice(bandChoiceFromList(query.band, readBandChoiceInBrowser()));
+    if (query.band) {
+      choice.current = bandChoiceFromList(query.band, choice.current);
+      writeBandChoice(choice.current);
+    }
   }, [query]);
 
   const update = (patch: Partial<CatalogQuery>) => setQuery((q) => ({ ...q, ...patch }));
@@ -146,5 +155,13 @@ export function CatalogBrowser({ initialQuery, initialResult }: { initialQuery: 
         </ul>
       </section>
     </div>
+  );
+}
+
+export function CatalogBrowser(props: Props) {
+  return (
+    <WithQueries>
+      <CatalogBrowserWithData {...props} />
+    </WithQueries>
   );
 }

@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { Badge } from "@/components/ui/badge";
-import { SHADE_LABELS, type Shade } from "@/lib/catalog/spec";
+import { SHADE_LABELS, type Shade } from "@/lib/catalog/spec-words";
 import type { HouseCard as HouseCardData } from "@/lib/catalog/house-card";
 import { drawingUrl, photoSrcSet, photoUrl } from "@/lib/catalog/photo-url";
 import { formatUsd } from "@/lib/checkout/money";

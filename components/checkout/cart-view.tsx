@@ -23,6 +23,7 @@ import { US_STATE_CODES, US_STATES } from "@/lib/checkout/us-states";
 import { readSavedSite, useSavedSite } from "@/lib/placement/saved-site-store";
 import { GiftPicker, giftDollarsToCents } from "./gift-picker";
 import { OrderSummary } from "./order-summary";
+import { WithQueries } from "@/components/with-queries";
 
 type QuoteResponse = {
   lines: { slug: string; name: string; quantity: number; unitPriceCents: number; lineCents: number }[];
@@ -39,7 +40,7 @@ type Details = z.infer<typeof detailsSchema>;
 const postJson = <T,>(url: string, body: unknown): Promise<T> => fetchJson<T>(url, { json: body });
 
 /** The cart: lines, delivery, gift and the buyer's details, priced by the server at every step. */
-export function CartView({
+function CartViewWithData({
   defaultContact,
   pickupPlace,
 }: {
@@ -261,5 +262,17 @@ export function CartView({
         </Button>
       </aside>
     </form>
+  );
+}
+
+export function CartView(props: {
+  defaultContact: { name: string; email: string } | null;
+  /** Where pickup happens, from the center's settings: "the rescue in <town>". */
+  pickupPlace: string;
+}) {
+  return (
+    <WithQueries>
+      <CartViewWithData {...props} />
+    </WithQueries>
   );
 }

@@ -16,6 +16,7 @@ import { queueColumns } from "./queue-columns";
 import { QueueCounts } from "./queue-counts";
 import { QueueFilters } from "./queue-filters";
 import { QueuePager } from "./queue-pager";
+import { WithQueries } from "@/components/with-queries";
 
 async function fetchQueue(search: string): Promise<QueuePage> {
   return fetchJson<QueuePage>(`/api/fulfillment/orders?${search}`, { fallbackMessage: "The queue could not be loaded." });
@@ -24,7 +25,7 @@ async function fetchQueue(search: string): Promise<QueuePage> {
 type Props = { initialParams: QueueParams; initialPage: QueuePage; summary: QueueSummary; now: string };
 
 /** The queue: counts, filters, a server-sorted and server-paged table, and the CSV of the view. */
-export function QueueBrowser({ initialParams, initialPage, summary, now }: Props) {
+function QueueBrowserWithData({ initialParams, initialPage, summary, now }: Props) {
   const [params, setParams] = useState<QueueParams>(initialParams);
   const [searchText, setSearchText] = useState(initialParams.q);
   const search = queueParamsToSearch(params).toString();
@@ -149,5 +150,13 @@ export function QueueBrowser({ initialParams, initialPage, summary, now }: Props
       )}
       {data ? <QueuePager page={data} onPage={(page) => setParams((p) => ({ ...p, page }))} onPageSize={(pageSize) => update({ pageSize })} /> : null}
     </div>
+  );
+}
+
+export function QueueBrowser(props: Props) {
+  return (
+    <WithQueries>
+      <QueueBrowserWithData {...props} />
+    </WithQueries>
   );
 }

@@ -19,6 +19,7 @@ import { SaveSitePanel } from "./save-site-panel";
 import { SiteFields } from "./site-fields";
 import { SkylineFields } from "./skyline-fields";
 import { usePlacementCheck } from "./use-placement-check";
+import { WithQueries } from "@/components/with-queries";
 
 type PlacementPlannerProps = {
   signedIn: boolean;
@@ -27,7 +28,7 @@ type PlacementPlannerProps = {
 };
 
 /** The site check: the form on one side, the live answer on the other (stacked on phones). */
-export function PlacementPlanner({ signedIn, siteId }: PlacementPlannerProps) {
+function PlacementPlannerWithData({ signedIn, siteId }: PlacementPlannerProps) {
   const form = useForm<PlacementFormValues, unknown, PlacementInput>({
     resolver: zodResolver(placementInputSchema),
     defaultValues: PLANNER_DEFAULTS,
@@ -180,5 +181,13 @@ function CheckProgress({ busy }: { busy: boolean }) {
         </span>
       ) : null}
     </div>
+  );
+}
+
+export function PlacementPlanner(props: PlacementPlannerProps) {
+  return (
+    <WithQueries>
+      <PlacementPlannerWithData {...props} />
+    </WithQueries>
   );
 }

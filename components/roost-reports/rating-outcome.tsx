@@ -5,6 +5,7 @@ import { fetchJson } from "@/lib/http/client";
 import { intervalWords, percent } from "./format";
 import { IntervalBar } from "./interval-bar";
 import type { Rating } from "@/lib/shared/rating";
+import { WithQueries } from "@/components/with-queries";
 
 type RatingFigures = {
   minimumHouses: number;
@@ -20,7 +21,7 @@ async function fetchRatings(): Promise<RatingFigures> {
 const RATING_WORDS: Record<string, string> = { good: "good", fair: "fair", poor: "poor" };
 
 /** Beside a site's rating: how houses on sites with the same rating fared, from buyers' reports. */
-export function RatingOutcome({ label }: { label: Rating }) {
+function RatingOutcomeWithData({ label }: { label: Rating }) {
   const { data, isError } = useQuery({ queryKey: ["roost-ratings"], queryFn: fetchRatings, staleTime: 5 * 60_000 });
   if (isError || !data) return null;
   const row = data.byRating.find((r) => r.rating === label);
@@ -43,5 +44,13 @@ export function RatingOutcome({ label }: { label: Rating }) {
       )}
       <p className="text-ink-soft">{data.caveat}</p>
     </div>
+  );
+}
+
+export function RatingOutcome(props: { label: Rating }) {
+  return (
+    <WithQueries>
+      <RatingOutcomeWithData {...props} />
+    </WithQueries>
   );
 }

@@ -25,6 +25,7 @@ import {
   type SortKey,
 } from "@/lib/staff/models-table-query";
 import { COLUMNS, NUMERIC } from "./models-table-columns";
+import { WithQueries } from "@/components/with-queries";
 
 async function fetchModels(query: ModelsQuery): Promise<ModelsPage> {
   const params = new URLSearchParams(Object.entries(query).map(([k, v]) => [k, String(v)]));
@@ -35,7 +36,7 @@ async function fetchModels(query: ModelsQuery): Promise<ModelsPage> {
 }
 
 /** The table is drawn on the server with the first page; every change after that asks the JSON route. */
-export function ModelsTable({ initial }: { initial: ModelsPage }) {
+function ModelsTableWithData({ initial }: { initial: ModelsPage }) {
   const [search, setSearch] = useState("");
   const [query, setQuery] = useState<ModelsQuery>(DEFAULT_MODELS_QUERY);
   // Wait for a pause in typing before asking the server.
@@ -197,5 +198,13 @@ export function ModelsTable({ initial }: { initial: ModelsPage }) {
         </nav>
       ) : null}
     </div>
+  );
+}
+
+export function ModelsTable(props: { initial: ModelsPage }) {
+  return (
+    <WithQueries>
+      <ModelsTableWithData {...props} />
+    </WithQueries>
   );
 }

@@ -25,6 +25,7 @@ import { PhotoCard } from "./photo-card";
 import { PhotoDropZone } from "./photo-drop-zone";
 import { UploadRow, type QueuedFile } from "./upload-queue";
 import { uploadPhoto } from "./upload-photo";
+import { WithQueries } from "@/components/with-queries";
 
 type Props = { slug: string; modelId: string; modelName: string; initialPhotos: StaffPhoto[] };
 
@@ -40,7 +41,7 @@ function precheck(file: File): string | null {
 
 let nextKey = 0;
 
-export function PhotoManager({ slug, modelId, modelName, initialPhotos }: Props) {
+function PhotoManagerWithData({ slug, modelId, modelName, initialPhotos }: Props) {
   const router = useRouter();
   const toast = useToast();
   const queryClient = useQueryClient();
@@ -247,5 +248,13 @@ export function PhotoManager({ slug, modelId, modelName, initialPhotos }: Props)
           : null}
       </ConfirmDialog>
     </div>
+  );
+}
+
+export function PhotoManager(props: Props) {
+  return (
+    <WithQueries>
+      <PhotoManagerWithData {...props} />
+    </WithQueries>
   );
 }

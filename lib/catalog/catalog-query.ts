@@ -27,14 +27,3 @@ export const catalogQuerySchema = z.object({
     .optional(),
 });
 export type CatalogQuery = z.infer<typeof catalogQuerySchema>;
-
-/** The same filters back to URL parameters, dropping empty ones (keeps links and the API in step). */
-export function catalogQueryToParams(query: Partial<CatalogQuery>): URLSearchParams {
-  const params = new URLSearchParams();
-  if (query.band) params.set("band", query.band);
-  if (query.chambers) params.set("chambers", String(query.chambers));
-  if (query.mount) params.set("mount", query.mount);
-  if (query.maxPriceCents !== undefined) params.set("maxPriceCents", String(query.maxPriceCents));
-  if (query.inStock) params.set("inStock", "true");
-  return params;
-}

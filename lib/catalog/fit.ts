@@ -1,5 +1,6 @@
 import { CLIMATE_BANDS, type BandId } from "./climate-bands";
-import { SHADE_LABELS, SHADES, type HouseSpec, type Shade } from "./spec";
+import type { HouseSpec } from "./spec";
+import { SHADE_LABELS, SHADES, type Shade } from "./spec-words";
 import type { Rating } from "@/lib/shared/rating";
 
 // How well a model suits a buyer's climate band (product brief §3). Steps count along the shade

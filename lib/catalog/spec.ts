@@ -1,6 +1,8 @@
 import { z } from "zod";
 
 export { formatInches } from "./format-inches";
+export * from "./spec-words";
+import { INTERIOR_FINISHES, INTERIOR_SURFACES, SHADES, WOODS } from "./spec-words";
 
 // The listed specification of a house model. Lengths are decimal inches (shop fractions are
 // shown with formatInches). The ranges only catch typing mistakes (feet or centimetres typed
@@ -23,18 +25,6 @@ function lengthInches({ label, min, max, hint }: LengthField) {
       `The ${label} must be at most ${max} in. Was it typed in feet or centimetres? ${hint}`,
     );
 }
-
-export const SHADES = ["black", "dark", "medium", "light", "white"] as const;
-export type Shade = (typeof SHADES)[number];
-
-export const INTERIOR_SURFACES = ["grooved", "plastic-mesh", "metal-mesh", "smooth"] as const;
-export type InteriorSurface = (typeof INTERIOR_SURFACES)[number];
-
-export const INTERIOR_FINISHES = ["bare", "stained", "painted"] as const;
-export type InteriorFinish = (typeof INTERIOR_FINISHES)[number];
-
-export const WOODS = ["exterior-plywood", "cedar", "pressure-treated", "other"] as const;
-export type Wood = (typeof WOODS)[number];
 
 function choice<T extends readonly [string, ...string[]]>(values: T, what: string) {
   return z.enum(values, { error: `Choose the ${what}.` });
@@ -126,35 +116,6 @@ export const houseSpecSchema = z
   });
 
 export type HouseSpec = z.infer<typeof houseSpecSchema>;
-
-// Our own plain words for the enum values, shown to staff and buyers.
-export const SHADE_LABELS: Record<Shade, string> = {
-  black: "Black",
-  dark: "Dark (deep brown or charcoal)",
-  medium: "Medium (mid brown or grey)",
-  light: "Light (tan or pale grey)",
-  white: "White",
-};
-
-export const INTERIOR_SURFACE_LABELS: Record<InteriorSurface, string> = {
-  grooved: "Grooved wood",
-  "plastic-mesh": "Plastic mesh",
-  "metal-mesh": "Metal mesh",
-  smooth: "Smooth wood",
-};
-
-export const INTERIOR_FINISH_LABELS: Record<InteriorFinish, string> = {
-  bare: "Bare wood",
-  stained: "Stained",
-  painted: "Painted",
-};
-
-export const WOOD_LABELS: Record<Wood, string> = {
-  "exterior-plywood": "Exterior-grade plywood",
-  cedar: "Cedar",
-  "pressure-treated": "Pressure-treated lumber",
-  other: "Other wood",
-};
 
 export const SPEC_FIELD_LABELS: Record<keyof HouseSpec, string> = {
   chamberCount: "Chambers",

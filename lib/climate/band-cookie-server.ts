@@ -1,6 +1,7 @@
 import "server-only";
 import { cookies } from "next/headers";
-import { BAND_COOKIE, parseBandChoice, type BandChoice } from "./band-cookie";
+import { BAND_COOKIE, type BandChoice } from "./band-cookie";
+import { parseBandChoice } from "./band-cookie-parse";
 
 /** The buyer's chosen band and what they gave for it, if they chose one on this browser. */
 export async function getBandChoice(): Promise<BandChoice | null> {

@@ -1,48 +1,33 @@
-import { z } from "zod";
 import { BAND_IDS, type BandId } from "@/lib/catalog/climate-bands";
 import type { Climate } from "./resolve";
 
 // The buyer's band follows them across the store in one cookie (not a secret; nothing personal
 // beyond a ZIP they typed). This module is its only reader and writer: the band finder, the
 // catalog's band filter and the placement planner write it through writeBandChoice, pages and
-// checkout read it through band-cookie-server.ts. It keeps what the buyer gave (the ZIP, or the
-// value and its unit, or the saved site), so the order can record where its band came from.
+// checkout read it through band-cookie-server.ts and band-cookie-parse.ts (the schema is there:
+// this module runs in the browser, where zod would be 23-35 kB of script). It keeps what the buyer
+// gave (the ZIP, or the value and its unit, or the saved site), so the order can record where its
+// band came from.
 export const BAND_COOKIE = "rw_band";
 const MAX_AGE_S = 31_536_000; // one year; common practice, no source
 
 export const BAND_SOURCES = ["zip", "typed", "site", "chosen"] as const;
 export type BandSource = (typeof BAND_SOURCES)[number];
 
-export const bandChoiceSchema = z.object({
-  id: z.enum(BAND_IDS),
-  /** zip: looked up from a ZIP; typed: the buyer's own figure; site: a placement check; chosen: picked from the list. */
-  source: z.enum(BAND_SOURCES).default("chosen"),
+/** zip: looked up from a ZIP; typed: the buyer's own figure; site: a placement check; chosen: picked from the list. */
+export type BandChoice = {
+  id: BandId;
+  source: BandSource;
   /** The warmest-month high behind the band, °F, unrounded (absent when picked from the list). */
-  valueF: z.number().finite().optional(),
-  zip: z.string().regex(/^\d{5}$/).optional(),
+  valueF?: number;
+  zip?: string;
   /** What the buyer typed, in their unit. */
-  typed: z.object({ value: z.number().finite(), unit: z.enum(["F", "C"]) }).optional(),
-  siteName: z.string().max(80).optional(),
-});
-export type BandChoice = z.infer<typeof bandChoiceSchema>;
-
-export function parseBandChoice(raw: string | undefined): BandChoice | null {
-  if (!raw) return null;
-  try {
-    const value: unknown = JSON.parse(decodeURIComponent(raw));
-    // Older cookies named the value julyHighF.
-    if (value && typeof value === "object" && "julyHighF" in value && !("valueF" in value)) {
-      (value as Record<string, unknown>).valueF = (value as Record<string, unknown>).julyHighF;
-    }
-    const parsed = bandChoiceSchema.safeParse(value);
-    return parsed.success ? parsed.data : null;
-  } catch {
-    return null;
-  }
-}
+  typed?: { value: number; unit: "F" | "C" };
+  siteName?: string;
+};
 
 export function serializeBandChoice(choice: BandChoice): string {
-  return `${BAND_COOKIE}=${encodeURIComponent(JSON.stringify(bandChoiceSchema.parse(choice)))}; path=/; max-age=${MAX_AGE_S}; samesite=lax`;
+  return `${BAND_COOKIE}=${encodeURIComponent(JSON.stringify(choice))}; path=/; max-age=${MAX_AGE_S}; samesite=lax`;
 }
 
 /** The choice a climate result makes (band finder and placement planner). */
@@ -66,19 +51,6 @@ export function bandChoiceFromClimate(climate: Climate, site?: { name: string })
 export function bandChoiceFromList(id: BandId, current: BandChoice | null): BandChoice {
   if (current && current.id === id) return current;
   return { id, source: "chosen" };
-}
-
-/** The choice in a Cookie header (a route handler's request) or in document.cookie. */
-export function bandChoiceFromCookieHeader(header: string | null | undefined): BandChoice | null {
-  const raw = (header ?? "")
-    .split(/;\s*/)
-    .find((c) => c.startsWith(`${BAND_COOKIE}=`))
-    ?.slice(BAND_COOKIE.length + 1);
-  return parseBandChoice(raw);
-}
-
-export function readBandChoiceInBrowser(): BandChoice | null {
-  return bandChoiceFromCookieHeader(document.cookie);
 }
 
 /** Browser only: remembers the choice for the whole store. */

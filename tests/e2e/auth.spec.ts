@@ -19,6 +19,17 @@ test("sign-in and sign-up pages pass the accessibility scan", async ({ page }) =
   await expectAccessible(page);
 });
 
+test("signing out from the header ends the session", async ({ page }) => {
+  await signInAs(page, "customer");
+  await page.goto("/houses");
+  await page.getByRole("banner").getByRole("button", { name: "Sign out" }).filter({ visible: true }).first().click();
+  await page.waitForURL((url) => url.pathname === "/");
+  await expect(page.getByRole("banner").getByRole("link", { name: "Sign in" }).filter({ visible: true }).first()).toBeVisible();
+  // The session is gone on the server too: a private page asks to sign in.
+  await page.goto("/account");
+  await expect(page).toHaveURL(/\/sign-in/);
+});
+
 for (const role of ROLES) {
   test(`${role} signs in and lands in their own area`, async ({ page }) => {
     await signInAs(page, role);

@@ -2,7 +2,7 @@ import { expect, test, type APIRequestContext, type Page } from "@playwright/tes
 import { signInAs } from "../e2e/support/accounts";
 import { URLS } from "./playwright.config";
 
-// Several instances on one PostgreSQL server (lib/cache/shared-tags-handler.mjs): a staff change
+// Several instances on one PostgreSQL server (lib/caching/shared-tags-handler.mjs): a staff change
 // made on one instance shows on every other within 2 s (issue 15's goal). The unshared instance
 // keeps its cached price: without the shared invalidations the peer would too.
 

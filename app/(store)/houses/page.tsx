@@ -33,10 +33,8 @@ async function Catalog({ searchParams }: { searchParams: SearchParams }) {
   const raw = Object.fromEntries(Object.entries(await searchParams).filter(([, v]) => typeof v === "string")) as Record<string, string>;
   const parsed = catalogQuerySchema.safeParse(raw);
   const query: CatalogQuery = parsed.success ? parsed.data : {};
-  if (!query.band && raw.band === undefined) {
-    const choice = await getBandChoice();
-    if (choice) query.band = choice.id;
-  }
+  const choice = await getBandChoice();
+  if (!query.band && raw.band === undefined && choice) query.band = choice.id;
   const result = await catalogCards(query);
   return (
     <>
@@ -56,7 +54,7 @@ async function Catalog({ searchParams }: { searchParams: SearchParams }) {
           .
         </p>
       ) : null}
-      <CatalogBrowser initialQuery={query} initialResult={result} />
+      <CatalogBrowser initialQuery={query} initialResult={result} bandChoice={choice} />
     </>
   );
 }

@@ -1,6 +1,6 @@
 import { getSessionUser } from "@/lib/auth/session";
 import { startCheckout } from "@/lib/checkout/commands/orders";
-import { bandChoiceFromCookieHeader } from "@/lib/climate/band-cookie";
+import { bandChoiceFromCookieHeader } from "@/lib/climate/band-cookie-parse";
 import { orderBandFromChoice } from "@/lib/climate/order-band";
 import { checkoutRequestSchema } from "@/lib/checkout/schemas";
 import { parseJson, route } from "@/lib/http/route";

@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from "vitest";
 import { formatOrderNumber } from "@/lib/checkout/order-number";
 import { seedDemo } from "@/lib/demo/commands";
-import { bandChoiceFromClimate, parseBandChoice, serializeBandChoice, type BandChoice } from "@/lib/climate/band-cookie";
+import { bandChoiceFromClimate, serializeBandChoice, type BandChoice } from "@/lib/climate/band-cookie";
+import { parseBandChoice } from "@/lib/climate/band-cookie-parse";
 import { loadClimateTableIfNeeded } from "@/lib/climate/commands";
 import type { Climate } from "@/lib/climate/resolve";
 import { deliverPendingMail } from "@/lib/mail/commands/sender";
