@@ -11,6 +11,9 @@ const nextConfig = {
   // catalog's reads are cached and tagged ("use cache", lib/catalog/cached.ts). The build never
   // touches the database: cached data is read at request time (after `connection()`), then kept.
   cacheComponents: true,
+  // Off, said out loud (the framework warns when it is left unset): on this version a partial
+  // prefetch of a dynamic route never settles (DEVELOPERS.md, Traps).
+  partialPrefetching: false,
   // The framework's in-memory "use cache" store, plus invalidations shared through PostgreSQL
   // when several instances run on one server (lib/caching/shared-tags-handler.mjs).
   cacheHandlers: { default: fileURLToPath(new URL("./lib/caching/shared-tags-handler.mjs", import.meta.url)) },
