@@ -2,12 +2,12 @@
 
 import Link from "next/link";
 import { usePathname } from "next/navigation";
-import { Suspense, useEffect, useRef, useState, type KeyboardEvent, type RefObject } from "react";
+import { Suspense, useEffect, useRef, type KeyboardEvent, type RefObject } from "react";
 
+import { SignOutButton } from "@/components/auth/sign-out-button";
 import { Wordmark } from "@/components/brand/wordmark";
-import { Button, ButtonLink } from "@/components/ui/button";
+import { ButtonLink } from "@/components/ui/button";
 import { cn } from "@/components/ui/cn";
-import { signOutInBrowser } from "@/lib/auth/sign-out-browser";
 import { isRole, ROLE_LABELS } from "@/lib/auth/roles";
 
 type HeaderUser = { name: string; role: string };
@@ -121,27 +121,8 @@ function UserArea({ user }: { user: HeaderUser | null | undefined }) {
           {isRole(user.role) ? ROLE_LABELS[user.role] : user.role}
         </span>
       </p>
-      <SignOutButton />
+      <SignOutButton size="sm" />
     </>
-  );
-}
-
-function SignOutButton() {
-  const [busy, setBusy] = useState(false);
-  return (
-    <Button
-      variant="secondary"
-      size="sm"
-      loading={busy}
-      onClick={() => {
-        setBusy(true);
-        void signOutInBrowser("/").then((left) => {
-          if (!left) setBusy(false);
-        });
-      }}
-    >
-      Sign out
-    </Button>
   );
 }
 

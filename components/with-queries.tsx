@@ -1,7 +1,7 @@
 "use client";
 
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { useState, type ReactNode } from "react";
+import { useState, type ComponentType, type ReactNode } from "react";
 
 // TanStack Query for the components that fetch from the client (the catalog's filters, the cart's
 // quote, the placement check, the workshop's and the shipping desk's tables). Each wraps itself in
@@ -19,4 +19,17 @@ function queryClient(): QueryClient {
 export function WithQueries({ children }: { children: ReactNode }) {
   const [client] = useState(queryClient);
   return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
+}
+
+/** The component, wrapped in WithQueries: `export const CatalogBrowser = withQueries(CatalogBrowserWithData)`. */
+export function withQueries<P extends object>(Component: ComponentType<P>) {
+  function Wrapped(props: P) {
+    return (
+      <WithQueries>
+        <Component {...props} />
+      </WithQueries>
+    );
+  }
+  Wrapped.displayName = `withQueries(${Component.displayName ?? Component.name})`;
+  return Wrapped;
 }

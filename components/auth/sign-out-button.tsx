@@ -4,11 +4,13 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { signOutInBrowser } from "@/lib/auth/sign-out-browser";
 
-export function SignOutButton() {
+/** Ends the session through the auth routes (lib/auth/sign-out-browser.ts) and goes home. */
+export function SignOutButton({ size }: { size?: "sm" } = {}) {
   const [busy, setBusy] = useState(false);
   return (
     <Button
       variant="secondary"
+      size={size}
       loading={busy}
       onClick={() => {
         setBusy(true);

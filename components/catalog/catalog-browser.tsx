@@ -15,7 +15,7 @@ import { BAND_IDS, CLIMATE_BANDS, type BandId } from "@/lib/catalog/climate-band
 import type { HouseCard as HouseCardData } from "@/lib/catalog/house-card";
 import { bandChoiceFromList, writeBandChoice, type BandChoice } from "@/lib/climate/band-cookie";
 import { HouseCard } from "./house-card";
-import { WithQueries } from "@/components/with-queries";
+import { withQueries } from "@/components/with-queries";
 
 type Result = { items: HouseCardData[]; total: number };
 
@@ -158,10 +158,4 @@ function CatalogBrowserWithData({ initialQuery, initialResult, bandChoice }: Pro
   );
 }
 
-export function CatalogBrowser(props: Props) {
-  return (
-    <WithQueries>
-      <CatalogBrowserWithData {...props} />
-    </WithQueries>
-  );
-}
+export const CatalogBrowser = withQueries(CatalogBrowserWithData);

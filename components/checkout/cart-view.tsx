@@ -23,7 +23,7 @@ import { US_STATE_CODES, US_STATES } from "@/lib/checkout/us-states";
 import { readSavedSite, useSavedSite } from "@/lib/placement/saved-site-store";
 import { GiftPicker, giftDollarsToCents } from "./gift-picker";
 import { OrderSummary } from "./order-summary";
-import { WithQueries } from "@/components/with-queries";
+import { withQueries } from "@/components/with-queries";
 
 type QuoteResponse = {
   lines: { slug: string; name: string; quantity: number; unitPriceCents: number; lineCents: number }[];
@@ -265,14 +265,4 @@ function CartViewWithData({
   );
 }
 
-export function CartView(props: {
-  defaultContact: { name: string; email: string } | null;
-  /** Where pickup happens, from the center's settings: "the rescue in <town>". */
-  pickupPlace: string;
-}) {
-  return (
-    <WithQueries>
-      <CartViewWithData {...props} />
-    </WithQueries>
-  );
-}
+export const CartView = withQueries(CartViewWithData);

@@ -16,7 +16,7 @@ import { queueColumns } from "./queue-columns";
 import { QueueCounts } from "./queue-counts";
 import { QueueFilters } from "./queue-filters";
 import { QueuePager } from "./queue-pager";
-import { WithQueries } from "@/components/with-queries";
+import { withQueries } from "@/components/with-queries";
 
 async function fetchQueue(search: string): Promise<QueuePage> {
   return fetchJson<QueuePage>(`/api/fulfillment/orders?${search}`, { fallbackMessage: "The queue could not be loaded." });
@@ -153,10 +153,4 @@ function QueueBrowserWithData({ initialParams, initialPage, summary, now }: Prop
   );
 }
 
-export function QueueBrowser(props: Props) {
-  return (
-    <WithQueries>
-      <QueueBrowserWithData {...props} />
-    </WithQueries>
-  );
-}
+export const QueueBrowser = withQueries(QueueBrowserWithData);

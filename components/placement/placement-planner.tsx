@@ -19,7 +19,7 @@ import { SaveSitePanel } from "./save-site-panel";
 import { SiteFields } from "./site-fields";
 import { SkylineFields } from "./skyline-fields";
 import { usePlacementCheck } from "./use-placement-check";
-import { WithQueries } from "@/components/with-queries";
+import { withQueries } from "@/components/with-queries";
 
 type PlacementPlannerProps = {
   signedIn: boolean;
@@ -184,10 +184,4 @@ function CheckProgress({ busy }: { busy: boolean }) {
   );
 }
 
-export function PlacementPlanner(props: PlacementPlannerProps) {
-  return (
-    <WithQueries>
-      <PlacementPlannerWithData {...props} />
-    </WithQueries>
-  );
-}
+export const PlacementPlanner = withQueries(PlacementPlannerWithData);

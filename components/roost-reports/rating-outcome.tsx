@@ -5,7 +5,7 @@ import { fetchJson } from "@/lib/http/client";
 import { intervalWords, percent } from "./format";
 import { IntervalBar } from "./interval-bar";
 import type { Rating } from "@/lib/shared/rating";
-import { WithQueries } from "@/components/with-queries";
+import { withQueries } from "@/components/with-queries";
 
 type RatingFigures = {
   minimumHouses: number;
@@ -47,10 +47,4 @@ function RatingOutcomeWithData({ label }: { label: Rating }) {
   );
 }
 
-export function RatingOutcome(props: { label: Rating }) {
-  return (
-    <WithQueries>
-      <RatingOutcomeWithData {...props} />
-    </WithQueries>
-  );
-}
+export const RatingOutcome = withQueries(RatingOutcomeWithData);

@@ -25,7 +25,7 @@ import {
   type SortKey,
 } from "@/lib/staff/models-table-query";
 import { COLUMNS, NUMERIC } from "./models-table-columns";
-import { WithQueries } from "@/components/with-queries";
+import { withQueries } from "@/components/with-queries";
 
 async function fetchModels(query: ModelsQuery): Promise<ModelsPage> {
   const params = new URLSearchParams(Object.entries(query).map(([k, v]) => [k, String(v)]));
@@ -201,10 +201,4 @@ function ModelsTableWithData({ initial }: { initial: ModelsPage }) {
   );
 }
 
-export function ModelsTable(props: { initial: ModelsPage }) {
-  return (
-    <WithQueries>
-      <ModelsTableWithData {...props} />
-    </WithQueries>
-  );
-}
+export const ModelsTable = withQueries(ModelsTableWithData);

@@ -25,7 +25,7 @@ import { PhotoCard } from "./photo-card";
 import { PhotoDropZone } from "./photo-drop-zone";
 import { UploadRow, type QueuedFile } from "./upload-queue";
 import { uploadPhoto } from "./upload-photo";
-import { WithQueries } from "@/components/with-queries";
+import { withQueries } from "@/components/with-queries";
 
 type Props = { slug: string; modelId: string; modelName: string; initialPhotos: StaffPhoto[] };
 
@@ -251,10 +251,4 @@ function PhotoManagerWithData({ slug, modelId, modelName, initialPhotos }: Props
   );
 }
 
-export function PhotoManager(props: Props) {
-  return (
-    <WithQueries>
-      <PhotoManagerWithData {...props} />
-    </WithQueries>
-  );
-}
+export const PhotoManager = withQueries(PhotoManagerWithData);
